@@ -1,0 +1,42 @@
+package dev.sheaf.vocab.io;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import java.io.StringWriter;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
+
+class SafeCsvTest {
+
+    private static String write(Object... cells) throws Exception {
+        StringWriter w = new StringWriter();
+        new SafeCsv(w).row(cells);
+        return w.toString();
+    }
+
+    @Test
+    void neutralisesTheOwaspExample() throws Exception {
+        // OWASP "CSV Injection" page, example payload =1+2";=1+2 -> "'=1+2"";=1+2" [pub]
+        assertEquals("\"'=1+2\"\";=1+2\"\r\n", write("=1+2\";=1+2"));
+    }
+
+    @ParameterizedTest
+    @ValueSource(strings = {"=", "+", "-", "@", "\t", "\r", "\n", "\0"})
+    void quotesAndPrefixesEveryDangerousLeadingCharacter(String lead) throws Exception {
+        // OWASP ASVS 5.0 requirement 1.2.10 lists these leading characters [pub]
+        String out = write(lead + "cmd|' /C calc'!A0");
+        assertEquals("\"'" + lead, out.substring(0, 2 + lead.length()));
+    }
+
+    @Test
+    void leavesOrdinaryTextAndNumbersAlone() throws Exception {
+        assertEquals("ripstop nylon,-1.5,3,\"a, b\"\r\n", write("ripstop nylon", -1.5, 3, "a, b"));
+    }
+
+    @Test
+    void doublesQuotesPerRfc4180() throws Exception {
+        // RFC 4180 §2.7: a double quote inside a quoted field is escaped by another double quote [pub]
+        assertEquals("\"say \"\"hi\"\"\"\r\n", write("say \"hi\""));
+    }
+}
