@@ -1,0 +1,55 @@
+package dev.sheaf.miner.text;
+
+import java.util.Objects;
+
+/**
+ * A keyword-in-context line: the words before a match, the match as written, the words after,
+ * and where it was found. Offsets are 0-based char offsets into the field text, end exclusive.
+ *
+ * @param listingId the listing's id
+ * @param source    the source file, as in {@code Listing.source()}
+ * @param locator   where inside the source ("line 12"), or empty
+ * @param field     the field kind label ({@code title}, {@code description}, {@code spec} ...)
+ * @param key       the spec key for spec fields, otherwise empty
+ * @param left      context before the match (trimmed to a few words)
+ * @param match     the matched text exactly as in the source
+ * @param right     context after the match
+ * @param start     offset of the match in the field text
+ * @param end       end offset (exclusive) of the match in the field text
+ */
+public record EvidenceLine(String listingId, String source, String locator, String field, String key,
+                           String left, String match, String right, int start, int end) {
+    public EvidenceLine {
+        Objects.requireNonNull(listingId, "listingId");
+        Objects.requireNonNull(source, "source");
+        Objects.requireNonNull(locator, "locator");
+        Objects.requireNonNull(field, "field");
+        Objects.requireNonNull(key, "key");
+        Objects.requireNonNull(left, "left");
+        Objects.requireNonNull(match, "match");
+        Objects.requireNonNull(right, "right");
+        if (start < 0 || end < start) {
+            throw new IllegalArgumentException("evidence span must satisfy 0 <= start <= end, got " + start + ".." + end);
+        }
+    }
+
+    /** Cuts a KWIC line out of a field text around [start, end), keeping about {@code width} chars each side on word boundaries. */
+    public static EvidenceLine cut(String listingId, String source, String locator, String field, String key,
+                                   String text, int start, int end, int width) {
+        int l = Math.max(0, start - width);
+        while (l > 0 && l < start && !Character.isWhitespace(text.charAt(l - 1))) {
+            l++;
+        }
+        int r = Math.min(text.length(), end + width);
+        while (r < text.length() && r > end && !Character.isWhitespace(text.charAt(r))) {
+            r--;
+        }
+        String left = oneLine(text.substring(l, start)).stripLeading();
+        String right = oneLine(text.substring(end, r)).stripTrailing();
+        return new EvidenceLine(listingId, source, locator, field, key, left, oneLine(text.substring(start, end)), right, start, end);
+    }
+
+    private static String oneLine(String s) {
+        return s.replaceAll("\\s+", " ");
+    }
+}
