@@ -140,11 +140,13 @@ public final class AgreementAnalysis {
                     + (single == 1 ? "is" : "are") + " left out of alpha, as Krippendorff specifies");
         }
         if (!fleiss.note().isEmpty()) {
-            notes.add("Fleiss' kappa " + fleiss.note());
+            notes.add("Fleiss' kappa: " + fleiss.note());
         }
         Map<String, Integer> values = new LinkedHashMap<>();
         for (int c = 0; c < k; c++) {
-            values.put(scale.labels.get(c), d.valueCounts[c]);
+            if (d.valueCounts[c] > 0) { // a value seen only in conflicting rows is not shown
+                values.put(scale.labels.get(c), d.valueCounts[c]);
+            }
         }
         attributes.add(new AgreementAttribute(d.attribute, scale.kind.label, scale.metricFromOptions, values,
                 d.items.size(), d.judgments, a, alpha, interval, t.verdict(alpha.alpha()), ka.observedAgreement(), fleiss,

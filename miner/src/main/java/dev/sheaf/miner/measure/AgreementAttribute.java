@@ -46,6 +46,17 @@ public record AgreementAttribute(String attribute, String scale, boolean metricF
         }
     }
 
+    /** The notes, led by why alpha is undefined when it is. */
+    public List<String> allNotes() {
+        if (alpha.defined()) {
+            return notes;
+        }
+        List<String> all = new java.util.ArrayList<>();
+        all.add("alpha n/a: " + alpha.undefinedReason());
+        all.addAll(notes);
+        return List.copyOf(all);
+    }
+
     /** The metric alpha used. */
     public AgreementMetric metric() {
         return alpha.metric();

@@ -60,7 +60,7 @@ public final class AgreementFiles {
                         a.judgments(), a.annotators(), k.pairableUnits(), k.pairableValues(), k.alpha(), ci.low(),
                         ci.high(), ci.level(), ci.usable(), a.verdict().label(), a.observedAgreement(), f.kappa(),
                         f.band().label(), f.items(), f.judgmentsPerItem(), a.meanCohenKappa(), a.meanCohenBand().label(),
-                        String.join("; ", notes(a)));
+                        String.join("; ", a.allNotes()));
             }
             csv.flush();
         });
@@ -89,17 +89,6 @@ public final class AgreementFiles {
             }
             csv.flush();
         });
-    }
-
-    /** The notes of an attribute, with alpha's reason when it is undefined. */
-    static List<String> notes(AgreementAttribute a) {
-        if (a.alpha().defined()) {
-            return a.notes();
-        }
-        List<String> all = new java.util.ArrayList<>();
-        all.add("alpha n/a: " + a.alpha().undefinedReason());
-        all.addAll(a.notes());
-        return all;
     }
 
     /** The report as a JSON tree (what {@value #JSON} holds). */
@@ -170,7 +159,7 @@ public final class AgreementFiles {
                 pn.put("band", p.band().label());
             }
             ArrayNode an = n.putArray("notes");
-            notes(a).forEach(an::add);
+            a.allNotes().forEach(an::add);
         }
         ArrayNode annotators = root.putArray("annotators");
         for (AgreementAnnotator r : report.annotators()) {
