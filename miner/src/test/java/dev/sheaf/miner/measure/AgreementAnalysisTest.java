@@ -207,6 +207,6 @@ class AgreementAnalysisTest {
         assertEquals(AgreementVerdict.UNDEFINED, a.verdict());
         assertEquals(1.0, a.observedAgreement(), 0);
         assertFalse(a.alphaInterval().defined());
-        assertTrue(AgreementFiles.notes(a).get(0).contains("no variation"));
+        assertTrue(a.allNotes().get(0).contains("no variation"));
     }
 }
