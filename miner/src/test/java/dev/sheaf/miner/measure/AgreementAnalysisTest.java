@@ -75,7 +75,7 @@ class AgreementAnalysisTest {
 
     @Test
     void cohenKappaOfThePublishedExampleThroughTheFrontDoor() {
-        // Wikipedia "Cohen's kappa" example [pub]: yes/yes 20, yes/no 5, no/yes 10, no/no 15 -> 0.40
+        // Wikipedia "Cohen's kappa" example [pub]; Cohen 1960, Educ. Psychol. Meas. 20(1): yes/yes 20, yes/no 5, no/yes 10, no/no 15 -> 0.40
         List<Judgment> j = new ArrayList<>();
         int item = 0;
         int[][] cells = {{20, 1, 1}, {5, 1, 0}, {10, 0, 1}, {15, 0, 0}};

@@ -20,7 +20,7 @@ class FleissKappaTest {
 
     @Test
     void kappaOfThePublishedTable() {
-        // Wikipedia "Fleiss' kappa" example, also in statsmodels' own tests [pub]; Fleiss 1971: κ = 0.210 (0.209931)
+        // Wikipedia "Fleiss' kappa" example, also in statsmodels' own tests [pub]; Fleiss 1971, Psychol. Bull. 76(5): κ = 0.210 (0.209931)
         assertEquals(0.209931, FleissKappa.fromTable(WIKIPEDIA), 5e-7);
     }
 
@@ -38,7 +38,8 @@ class FleissKappaTest {
             units.add(u);
         }
         FleissResult r = FleissKappa.of(units, 5, AgreementThresholds.DEFAULTS);
-        // Wikipedia "Fleiss' kappa" example [pub]: 0.209931, "fair" in Landis & Koch 1977 [pub]
+        // Wikipedia "Fleiss' kappa" example, also in statsmodels' own tests [pub]; Fleiss 1971, Psychol. Bull. 76(5):
+        // 0.209931; "fair" per Landis & Koch 1977, Biometrics 33(1) [pub]
         assertEquals(0.209931, r.kappa(), 5e-7);
         assertEquals(KappaBand.FAIR, r.band());
         assertEquals(10, r.items());
