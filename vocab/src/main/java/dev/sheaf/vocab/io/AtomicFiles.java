@@ -48,7 +48,7 @@ public final class AtomicFiles {
         Path abs = target.toAbsolutePath();
         Path dir = abs.getParent();
         Files.createDirectories(dir);
-        Path tmp = Files.createTempFile(dir, "." + abs.getFileName() + ".", ".tmp");
+        Path tmp = newTempFile(dir, abs.getFileName() + ".tmp");
         boolean done = false;
         try {
             try (FileChannel ch = FileChannel.open(tmp, StandardOpenOption.WRITE, StandardOpenOption.TRUNCATE_EXISTING);
@@ -60,7 +60,7 @@ public final class AtomicFiles {
             }
             if (keepBackup && Files.exists(abs)) {
                 Path backup = abs.resolveSibling(abs.getFileName() + "~");
-                Path btmp = Files.createTempFile(dir, "." + abs.getFileName() + ".", ".bak.tmp");
+                Path btmp = newTempFile(dir, abs.getFileName() + ".bak.tmp");
                 Files.copy(abs, btmp, StandardCopyOption.REPLACE_EXISTING);
                 move(btmp, backup);
             }
@@ -86,6 +86,25 @@ public final class AtomicFiles {
     /** Writes a whole string atomically (UTF-8). */
     public static void writeString(Path target, String content) throws IOException {
         write(target, out -> out.write(content.getBytes(StandardCharsets.UTF_8)));
+    }
+
+    /**
+     * A fresh file beside the target. Unlike {@link Files#createTempFile}, which makes files readable
+     * by their owner only, this one gets the ordinary permissions (the process umask), because our
+     * outputs are reports and tables meant to be shared.
+     */
+    private static Path newTempFile(Path dir, String suffix) throws IOException {
+        java.util.concurrent.ThreadLocalRandom rnd = java.util.concurrent.ThreadLocalRandom.current();
+        for (int attempt = 0; ; attempt++) {
+            Path p = dir.resolve("." + Long.toHexString(rnd.nextLong()) + "." + suffix);
+            try {
+                return Files.createFile(p);
+            } catch (java.nio.file.FileAlreadyExistsException e) {
+                if (attempt > 100) {
+                    throw e;
+                }
+            }
+        }
     }
 
     private static void move(Path from, Path to) throws IOException {

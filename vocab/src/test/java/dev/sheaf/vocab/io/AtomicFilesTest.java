@@ -46,4 +46,15 @@ class AtomicFilesTest {
         assertTrue(Files.exists(f));
         assertEquals("héllo", Files.readString(f, StandardCharsets.UTF_8));
     }
+
+    @Test
+    void outputsAreReadableByOthersNotOnlyTheOwner() throws IOException {
+        Path f = dir.resolve("report.csv");
+        AtomicFiles.writeString(f, "a,b");
+        if (f.getFileSystem().supportedFileAttributeViews().contains("posix")) {
+            assertTrue(Files.getPosixFilePermissions(f).contains(java.nio.file.attribute.PosixFilePermission.OTHERS_READ)
+                    || Files.getPosixFilePermissions(f).contains(java.nio.file.attribute.PosixFilePermission.GROUP_READ),
+                    "written with owner-only permissions: " + Files.getPosixFilePermissions(f));
+        }
+    }
 }
