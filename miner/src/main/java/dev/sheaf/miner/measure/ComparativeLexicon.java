@@ -183,7 +183,7 @@ final class ComparativeLexicon {
         for (Synset s : iw.getSenses()) {
             for (Word w : s.getWords()) {
                 if (w.getLemma().equalsIgnoreCase(iw.getLemma())) {
-                    count += (int) Math.min(Integer.MAX_VALUE, w.getUseCount());
+                    count += w.getUseCount();
                 }
             }
         }

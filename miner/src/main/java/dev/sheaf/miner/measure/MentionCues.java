@@ -96,6 +96,17 @@ public final class MentionCues {
     }
 
     /**
+     * The hedge list (lower-case phrases): degree hedges, then epistemic hedges, then {@code "-ish"}.
+     * The same list marks mentions as hedged and feeds {@link #hedges(String)}.
+     */
+    public static List<String> hedgeWords() {
+        List<String> all = new ArrayList<>(HedgeWords.DEGREE);
+        all.addAll(HedgeWords.EPISTEMIC);
+        all.add("-" + HedgeWords.ISH);
+        return List.copyOf(all);
+    }
+
+    /**
      * Every hedge in the sentence, whatever terms it holds, in sentence order: epistemic hedges
      * always, degree hedges when a gradable word follows, and {@code -ish} words.
      */

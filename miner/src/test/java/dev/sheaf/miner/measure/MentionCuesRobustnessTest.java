@@ -42,6 +42,18 @@ class MentionCuesRobustnessTest {
     }
 
     @Test
+    void givesTheSameReadingsFromManyThreadsAsFromOne() throws Exception {
+        List<MentionCuesSentenceTableTest.Row> rows = MentionCuesSentenceTableTest.rows();
+        List<List<Mention>> sequential = rows.stream()
+                .map(r -> MentionCues.standard().read(r.sentence(), r.spans())).toList();
+        for (int round = 0; round < 5; round++) {
+            List<List<Mention>> parallel = rows.parallelStream()
+                    .map(r -> MentionCues.standard().read(r.sentence(), r.spans())).toList();
+            assertEquals(sequential, parallel);
+        }
+    }
+
+    @Test
     void survivesMisspellingsAndReadsTheCommonOnes() {
         String[] sentences = {"lightr than the other", "heavyer and roomyer", "doesnt have a hod", "isnt waterprof",
                 "kinda too bulkey", "abit heavier", "not as warrm as i hoped", "withoot a hood", "moer breathable"};

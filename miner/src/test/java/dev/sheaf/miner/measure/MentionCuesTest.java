@@ -292,6 +292,20 @@ class MentionCuesTest {
     }
 
     @Test
+    void publishesOneHedgeListWithoutDuplicates() {
+        List<String> words = MentionCues.hedgeWords();
+        assertTrue(words.containsAll(List.of("a bit", "a little", "slightly", "kind of", "sort of", "somewhat", "rather",
+                "fairly", "a tad", "maybe", "i think", "-ish")), words::toString);
+        assertEquals(words.size(), new java.util.HashSet<>(words).size());
+        for (String w : words) {
+            if (!w.equals("-ish")) {
+                assertEquals(List.of(cue(CueKind.HEDGE, 0, w.length(), w, w)),
+                        CUES.hedges(w + " warmer").stream().filter(c -> c.start() == 0).toList(), w);
+            }
+        }
+    }
+
+    @Test
     void reportsTheHedgesOfASentence() {
         List<Cue> hedges = CUES.hedges("I think it's kind of warmish, a little pocket, a bit heavier, sort of a hood");
         assertEquals(List.of(cue(CueKind.HEDGE, 0, 7, "I think", "i think"), cue(CueKind.HEDGE, 13, 20, "kind of", "kind of"),
