@@ -1,7 +1,5 @@
 package dev.sheaf.miner.text;
 
-import java.math.BigDecimal;
-import java.math.MathContext;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -31,10 +29,9 @@ final class QuantityScanner {
     private static final String[] WATER_CUES = {"hydrostatic", "waterproof", "water column", "water-column",
             "water resist", "water-resist", "h2o", "h\u2082o"};
     /** A water column read from cue words alone must be at least this many mm: real ratings are 800 mm and up, poles are 8.5 mm. */
-    private static final BigDecimal WATER_CUE_MIN = BigDecimal.valueOf(500);
-    private static final BigDecimal THOUSAND = BigDecimal.valueOf(1000);
-    private static final BigDecimal SIXTEEN = BigDecimal.valueOf(16);
-    private static final BigDecimal TWELVE = BigDecimal.valueOf(12);
+    private static final long WATER_CUE_MIN = 500;
+    /** Longer numbers are not read: no spec value has 16 significant digits, and 15 keep every value exact in a double. */
+    private static final int MAX_DIGITS = 15;
 
     private final CharSequence text;
     private final int len;
@@ -50,11 +47,11 @@ final class QuantityScanner {
     private static final class Num {
         final int start;
         final int end;
-        final BigDecimal value;
+        final QuantityValue value;
         final boolean integer;
         final boolean kilo;
 
-        Num(int start, int end, BigDecimal value, boolean integer, boolean kilo) {
+        Num(int start, int end, QuantityValue value, boolean integer, boolean kilo) {
             this.start = start;
             this.end = end;
             this.value = value;
@@ -142,7 +139,7 @@ final class QuantityScanner {
      */
     private Num number(int i) {
         char c = at(i);
-        BigDecimal frac = vulgar(c);
+        QuantityValue frac = vulgar(c);
         if (frac != null) {
             return new Num(i, i + 1, frac, false, false);
         }
@@ -157,10 +154,10 @@ final class QuantityScanner {
         while (true) {
             char ch = at(p);
             if (isDigit(ch)) {
-                if (digits < 18) {
+                if (digits < MAX_DIGITS) {
                     unscaled = unscaled * 10 + (ch - '0');
                 } else {
-                    bad = true;   // no spec value has 19 digits; refuse rather than round
+                    bad = true;   // refuse rather than round
                 }
                 digits++;
                 groupLen++;
@@ -200,7 +197,7 @@ final class QuantityScanner {
             resume = p;
             return null;
         }
-        BigDecimal value = BigDecimal.valueOf(unscaled, scale);
+        QuantityValue value = QuantityValue.decimal(unscaled, scale);
         if (groupSep == 0 && !dot) {
             char ch = at(p);
             if ((ch == '/' || ch == '\u2044') && isDigit(at(p + 1))) {
@@ -219,18 +216,18 @@ final class QuantityScanner {
                     return null;
                 }
                 if (properFraction(unscaled, den)) {
-                    return new Num(i, q, fraction(unscaled, den), false, false);
+                    return new Num(i, q, QuantityValue.of(unscaled, den), false, false);
                 }
                 return new Num(i, p, value, true, false);   // 20/25: two numbers, not a fraction
             }
-            BigDecimal f = vulgar(ch);
+            QuantityValue f = vulgar(ch);
             if (f != null) {
-                return new Num(i, p + 1, value.add(f), false, false);
+                return new Num(i, p + 1, value.plus(f), false, false);
             }
             if (ch == ' ' || ch == '-' || isGroupSpace(ch)) {
                 f = vulgar(at(p + 1));
                 if (f != null) {
-                    return new Num(i, p + 2, value.add(f), false, false);
+                    return new Num(i, p + 2, value.plus(f), false, false);
                 }
                 int q = p + 1;
                 long num = 0;
@@ -246,7 +243,7 @@ final class QuantityScanner {
                         r++;
                     }
                     if (!isDigit(at(r)) && at(r) != '/' && properFraction(num, den)) {
-                        return new Num(i, r, value.add(fraction(num, den)), false, false);
+                        return new Num(i, r, value.plus(QuantityValue.of(num, den)), false, false);
                     }
                 }
             }
@@ -268,10 +265,6 @@ final class QuantityScanner {
             }
         }
         return false;
-    }
-
-    private static BigDecimal fraction(long num, long den) {
-        return BigDecimal.valueOf(num).divide(BigDecimal.valueOf(den), MathContext.DECIMAL128);
     }
 
     private boolean threeDigitsThenEnd(int q) {
@@ -476,6 +469,9 @@ final class QuantityScanner {
             return null;   // 2 in 1
         }
         if (Character.isLetter(n)) {
+            if (afterTimes) {
+                return new Hit(UnitTable.INCH, e, WORD, attached);
+            }
             if (!isAsciiLetter(n)) {
                 return null;
             }
@@ -491,6 +487,8 @@ final class QuantityScanner {
     }
 
     private int wordStart;
+    /** True while reading the unit after the last factor of "84 x 52 x 40". */
+    private boolean afterTimes;
 
     /** After an optional dot and up to two spaces, the end of the next ASCII word (its start in {@link #wordStart}), or -1. */
     private int nextWordAfter(int e) {
@@ -513,17 +511,20 @@ final class QuantityScanner {
             }
         }
         UnitDef def = u.def;
-        BigDecimal v = n1.value;
+        QuantityValue v = n1.value;
         if (n1.kilo) {
             if (def != UnitTable.MILLIMETRE) {
                 return u.end;   // 10k steps, 5K run: not a unit we read with a multiplier
             }
             def = UnitTable.MM_WATER;
-            v = v.multiply(THOUSAND);
+            v = v.times(1000);
         } else if (def == UnitTable.MILLIMETRE && v.compareTo(WATER_CUE_MIN) >= 0 && cueNear(n1.start, u.end, WATER_CUES)) {
             def = UnitTable.MM_WATER;
         }
         int sign = def.dimension() == Dimension.TEMPERATURE ? signBefore(n1.start) : -1;
+        if (v == null) {
+            return u.end;
+        }
         if (sign >= 0) {
             v = v.negate();
         }
@@ -554,7 +555,11 @@ final class QuantityScanner {
         if (u2 == null || u2.def != small) {
             return -1;
         }
-        BigDecimal total = n1.value.multiply(u.def == UnitTable.POUND ? SIXTEEN : TWELVE).add(n2.value);
+        QuantityValue big = n1.value.times(u.def == UnitTable.POUND ? 16 : 12);
+        QuantityValue total = big == null ? null : big.plus(n2.value);
+        if (total == null) {
+            return -1;
+        }
         emit(small, n1.start, u2.end, total, total);
         return u2.end;
     }
@@ -589,15 +594,15 @@ final class QuantityScanner {
             return -1;
         }
         UnitDef def = u.def;
-        BigDecimal lo = n1.value;
-        BigDecimal hi = n2.value;
+        QuantityValue lo = n1.value;
+        QuantityValue hi = n2.value;
         if (n1.kilo) {
             if (def != UnitTable.MILLIMETRE) {
                 return -1;
             }
             def = UnitTable.MM_WATER;
-            lo = lo.multiply(THOUSAND);
-            hi = hi.multiply(THOUSAND);
+            lo = lo.times(1000);
+            hi = hi.times(1000);
         } else if (def == UnitTable.MILLIMETRE && lo.compareTo(WATER_CUE_MIN) >= 0 && cueNear(n1.start, u.end, WATER_CUES)) {
             def = UnitTable.MM_WATER;
         }
@@ -642,7 +647,9 @@ final class QuantityScanner {
                 return -1;
             }
             factors[count++] = n;
+            afterTimes = true;   // after "84 x 52 x 40", "in" is the inch whatever word follows
             Hit u = unitAfter(n.end, n);
+            afterTimes = false;
             if (u != null) {
                 if (u.def.dimension() != Dimension.LENGTH) {
                     return -1;
@@ -664,8 +671,8 @@ final class QuantityScanner {
         if (wl < 2 || wl > 5) {
             return e;
         }
-        String w = lowerAscii(i, e);
-        if (w.equals("fp")) {
+        // Most words are neither: decide without allocating (this runs for every word of the corpus).
+        if (wl == 2 && regionIs(i, "fp")) {
             int q = e;
             if (at(q) == ':' || at(q) == '-') {
                 q++;
@@ -682,9 +689,12 @@ final class QuantityScanner {
             return n.end;
         }
         int value = -1;
-        for (int k = 0; k < NUMBER_WORDS.length; k++) {
-            if (NUMBER_WORDS[k].equals(w)) {
-                value = k + 1;
+        char next = (char) (at(e + 1) | 0x20);
+        if ((at(e) == '-' || at(e) == ' ') && (next == 'p' || next == 's')) {   // two-person, three season
+            for (int k = 0; k < NUMBER_WORDS.length && value < 0; k++) {
+                if (NUMBER_WORDS[k].length() == wl && regionIs(i, NUMBER_WORDS[k])) {
+                    value = k + 1;
+                }
             }
         }
         if (value < 0 || !(at(e) == '-' || at(e) == ' ') || !isAsciiLetter(at(e + 1))) {
@@ -695,7 +705,7 @@ final class QuantityScanner {
         if ((def != UnitTable.PERSON && def != UnitTable.SEASON) || !boundary(e2)) {
             return e;
         }
-        BigDecimal v = BigDecimal.valueOf(value);
+        QuantityValue v = QuantityValue.of(value, 1);
         if (def == UnitTable.SEASON && value > 4) {
             return e;
         }
@@ -703,24 +713,27 @@ final class QuantityScanner {
         return e2;
     }
 
-    private boolean plausible(UnitDef def, Hit u, Num n1, BigDecimal lo, BigDecimal hi, int start, int end) {
+    private boolean plausible(UnitDef def, Hit u, Num n1, QuantityValue lo, QuantityValue hi, int start, int end) {
+        if (lo == null || hi == null) {
+            return false;   // overflowed while scaling
+        }
         if (needsInteger(def) && !n1.integer) {
             return false;
         }
         if (def == UnitTable.DENIER) {
-            return u.form != BARE || (u.attached && lo.compareTo(BigDecimal.valueOf(5)) >= 0);   // 3D mesh is not 3 denier
+            return u.form != BARE || (u.attached && lo.compareTo(5) >= 0);   // 3D mesh is not 3 denier
         }
         if (def == UnitTable.PERSON) {
-            return lo.signum() > 0 && hi.compareTo(BigDecimal.valueOf(u.form == BARE ? 12 : 20)) <= 0 && (u.form != BARE || u.attached);
+            return lo.signum() > 0 && hi.compareTo(u.form == BARE ? 12 : 20) <= 0 && (u.form != BARE || u.attached);
         }
         if (def == UnitTable.SEASON) {
-            return lo.signum() > 0 && hi.compareTo(BigDecimal.valueOf(4)) <= 0;
+            return lo.signum() > 0 && hi.compareTo(4) <= 0;
         }
         if (def == UnitTable.FILL_POWER) {
             return fillPower(lo) && fillPower(hi);
         }
         if (def.dimension() == Dimension.TEMPERATURE && u.form == BARE) {
-            return lo.compareTo(BigDecimal.valueOf(-100)) >= 0 && hi.compareTo(BigDecimal.valueOf(150)) <= 0
+            return lo.compareTo(-100) >= 0 && hi.compareTo(150) <= 0
                     && (dualBefore(start) || dualAfter(end) || cueNear(start, end, TEMPERATURE_CUES));
         }
         return true;
@@ -730,8 +743,8 @@ final class QuantityScanner {
         return def == UnitTable.PERSON || def == UnitTable.SEASON || def == UnitTable.FILL_POWER;
     }
 
-    private static boolean fillPower(BigDecimal v) {
-        return v.compareTo(BigDecimal.valueOf(100)) >= 0 && v.compareTo(BigDecimal.valueOf(1200)) <= 0;
+    private static boolean fillPower(QuantityValue v) {
+        return v.compareTo(100) >= 0 && v.compareTo(1200) <= 0;
     }
 
     /** 15 F / -9 C: a bare C right after another temperature, across only "/", "(", "," or spaces. */
@@ -771,13 +784,13 @@ final class QuantityScanner {
         return h != null && h.def.dimension() == Dimension.TEMPERATURE;
     }
 
-    private void emit(UnitDef def, int start, int end, BigDecimal lo, BigDecimal hi) {
+    private void emit(UnitDef def, int start, int end, QuantityValue lo, QuantityValue hi) {
         int a = approxBefore(start);
         int s = a >= 0 ? a : start;
         double si = def.toBaseDouble(lo);
         double siMax = lo == hi ? si : def.toBaseDouble(hi);
-        out.add(new Quantity(lo.doubleValue(), def.dimension(), def.symbol(), si, s, end,
-                text.subSequence(s, end).toString(), hi.doubleValue(), siMax, a >= 0));
+        out.add(new Quantity(lo.toDouble(), def.dimension(), def.symbol(), si, s, end,
+                text.subSequence(s, end).toString(), lo == hi ? lo.toDouble() : hi.toDouble(), siMax, a >= 0));
         if (def.dimension() == Dimension.TEMPERATURE) {
             lastTemperatureEnd = end;
         }
@@ -822,12 +835,12 @@ final class QuantityScanner {
         if (b == e || (b > 0 && Character.isLetterOrDigit(at(b - 1)))) {
             return -1;
         }
-        String w = lowerAscii(b, e);
-        if (dotted && w.equals("ca")) {
+        int wl = e - b;
+        if (dotted && wl == 2 && regionIs(b, "ca")) {
             return b;
         }
         for (String a : APPROX_WORDS) {
-            if (a.equals(w)) {
+            if (a.length() == wl && regionIs(b, a)) {
                 return b;
             }
         }
@@ -877,12 +890,18 @@ final class QuantityScanner {
                 break;
             }
         }
-        for (String cue : cues) {
-            for (int k = from; k + cue.length() <= to; k++) {
-                if (regionIs(k, cue)) {
+        for (int k = from; k < to; k++) {
+            char c = at(k);
+            if (c >= 'A' && c <= 'Z') {
+                c = (char) (c + 32);
+            }
+            for (String cue : cues) {
+                if (cue.charAt(0) == c && k + cue.length() <= to && regionIs(k, cue)) {
                     return true;
                 }
             }
+        }
+        for (String cue : cues) {
             if (context.contains(cue)) {
                 return true;
             }
@@ -985,20 +1004,20 @@ final class QuantityScanner {
         return c == '\u2009' || c == '\u202F' || c == '\u00A0' || c == '\u2007';
     }
 
-    private static final BigDecimal[] VULGAR = new BigDecimal[0x215F - 0x2150];
-    private static final BigDecimal QUARTER = new BigDecimal("0.25");
-    private static final BigDecimal HALF = new BigDecimal("0.5");
-    private static final BigDecimal THREE_QUARTERS = new BigDecimal("0.75");
+    private static final QuantityValue[] VULGAR = new QuantityValue[0x215F - 0x2150];
+    private static final QuantityValue QUARTER = QuantityValue.of(1, 4);
+    private static final QuantityValue HALF = QuantityValue.of(1, 2);
+    private static final QuantityValue THREE_QUARTERS = QuantityValue.of(3, 4);
 
     static {
         int[][] f = {{1, 7}, {1, 9}, {1, 10}, {1, 3}, {2, 3}, {1, 5}, {2, 5}, {3, 5}, {4, 5}, {1, 6}, {5, 6}, {1, 8}, {3, 8}, {5, 8}, {7, 8}};
         for (int k = 0; k < f.length; k++) {
-            VULGAR[k] = fraction(f[k][0], f[k][1]);
+            VULGAR[k] = QuantityValue.of(f[k][0], f[k][1]);
         }
     }
 
-    /** ¼ ½ ¾ and U+2150..U+215E (⅐ … ⅞) as exact (or 34-digit) decimals; null for anything else. */
-    private static BigDecimal vulgar(char c) {
+    /** ¼ ½ ¾ and U+2150..U+215E (⅐ … ⅞) as exact fractions; null for anything else. */
+    private static QuantityValue vulgar(char c) {
         switch (c) {
             case '\u00BC': return QUARTER;
             case '\u00BD': return HALF;
