@@ -91,6 +91,10 @@ final class QuantityScanner {
                     i = alnumEnd(i);   // part of a code such as "X200" or "FH-000123b"
                     continue;
                 }
+                if (i > 0 && (text.charAt(i - 1) == '.' || (text.charAt(i - 1) == ',' && i > 1 && isDigit(text.charAt(i - 2))))) {
+                    i = numberRunEnd(i);   // "v1.2", ".5": the tail of something else, not a number of its own
+                    continue;
+                }
                 i = Math.max(i + 1, atNumber(i));
             } else if (isAsciiLetter(c)) {
                 int e = asciiWordEnd(i);
@@ -967,6 +971,14 @@ final class QuantityScanner {
             q++;
         }
         return q;
+    }
+
+    private int numberRunEnd(int p) {
+        int q = p;
+        while (q < len && (isDigit(text.charAt(q)) || ((text.charAt(q) == '.' || text.charAt(q) == ',') && isDigit(at(q + 1))))) {
+            q++;
+        }
+        return Math.max(q, p + 1);
     }
 
     private int alnumEnd(int p) {

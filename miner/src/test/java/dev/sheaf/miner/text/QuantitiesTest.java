@@ -137,7 +137,7 @@ class QuantitiesTest {
             "1,2 kg", "1,5 L", "weighs 0,85 kg", "1,2345 kg", "1.200,5 kg", "12,34,567 g", "1.2.3 kg",
             "fits 2 in the bag", "a 2-in-1 jacket", "2 in 1", "the \"Ridge 2\" tent", "3D mesh", "Size 10 C",
             "a 10K run", "10,000 mAh", "70 g/m² fabric", "2 m² of floor", "X200 g", "12/05/2024 kg",
-            "the 1.2", "2 great", "9 seasons", "5 fill", "FP 80", "13P", "2 p", "20 D",
+            "the 1.2", "2 great", "9 seasons", "5 fill", "FP 80", "13P", "2 p", "20 D", "model v1.2 kg", ".5 kg",
             "" })
     void findsNoQuantityWhereNoneIsStatedOrTheNotationIsAmbiguous(String text) {
         assertEquals(List.of(), Quantities.find(text));
