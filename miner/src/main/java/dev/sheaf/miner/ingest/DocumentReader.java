@@ -61,6 +61,14 @@ final class DocumentReader implements ListingReader {
 
     /** Built once: loading Tika's parsers takes a while; the parser itself is thread-safe. */
     private static final class Holder {
+        static {
+            // POI logs through Log4j's API; without a provider Log4j prints a warning on stderr.
+            // Its built-in simple logger (errors only) keeps stderr for Sheaf's own diagnostics.
+            if (System.getProperty("log4j2.loggerContextFactory") == null) {
+                System.setProperty("log4j2.loggerContextFactory", "org.apache.logging.log4j.simple.SimpleLoggerContextFactory");
+            }
+        }
+
         static final AutoDetectParser PARSER = build();
 
         private static AutoDetectParser build() {

@@ -141,7 +141,8 @@ final class JsonReader implements ListingReader {
                 JsonToken first = p.nextToken();
                 if (first == JsonToken.START_OBJECT) {
                     listed = true;
-                    mapper.emit((ObjectNode) p.readValueAsTree(), position(p));
+                    String at = position(p);
+                    mapper.emit((ObjectNode) p.readValueAsTree(), at);
                     elements(p, mapper);
                     continue;
                 }

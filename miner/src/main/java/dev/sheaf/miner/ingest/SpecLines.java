@@ -93,6 +93,22 @@ final class SpecLines {
                 flush(para, fields);
                 continue;
             }
+            if (line.startsWith("\t")) {
+                // Extracted tables (Tika) put each cell on its own tab-indented line, rows apart
+                List<String> cells = new ArrayList<>();
+                int j = i;
+                while (j < lines.length && lines[j].startsWith("\t") && !lines[j].isBlank()) {
+                    cells.add(lines[j].strip());
+                    j++;
+                }
+                Field spec = cells.size() == 2 ? spec(cells.get(0) + "\t" + cells.get(1)) : null;
+                if (spec != null) {
+                    flush(para, fields);
+                    fields.add(spec);
+                    i = j - 1;
+                    continue;
+                }
+            }
             if (markdown) {
                 Matcher h = HEADING.matcher(line);
                 if (h.matches()) {
