@@ -105,8 +105,22 @@ final class DocumentReader implements ListingReader {
         }
     }
 
+    /** The media type of a file's content alone, without its name. */
+    private static MediaType detectContent(SourceFile file) throws IOException {
+        try (TikaInputStream in = TikaInputStream.get(file.path())) {
+            return Holder.PARSER.getDetector().detect(in, new Metadata());
+        }
+    }
+
     @Override
     public void read(SourceFile file) throws IOException {
+        if (detectContent(file).equals(MediaType.OCTET_STREAM)) {
+            MediaType byName = detect(file);
+            file.problem("", "corrupt", "the content is not a recognisable document"
+                    + (byName.equals(MediaType.OCTET_STREAM) ? "" : " (the name says " + byName + ")")
+                    + "; check that the file opens in its own program, or exclude it");
+            return;
+        }
         Metadata md = new Metadata();
         md.set(TikaCoreProperties.RESOURCE_NAME_KEY, file.path().getFileName().toString());
         WriteOutContentHandler out = new WriteOutContentHandler(file.writeLimit());
@@ -172,7 +186,8 @@ final class DocumentReader implements ListingReader {
                 file.problem("", "unsupported", "no text can be read from " + type + " files; exclude them from the source");
             } else {
                 file.problem("", "empty", "no text found in the " + (type == null ? "document" : type)
-                        + " (a scanned PDF has only images; Sheaf does not run OCR)");
+                        + (type != null && type.startsWith("application/pdf")
+                        ? " (a scanned PDF has only images; Sheaf does not run OCR)" : ""));
             }
             return;
         }
