@@ -297,14 +297,24 @@ public final class EvidenceIndex implements Closeable {
 
     /**
      * Builds a new index generation. {@link #add} (or {@link #accept}, usable as an ingest sink) is
-     * thread-safe; documents are buffered in RAM and flushed in large segments. Nothing becomes
-     * visible until {@link #commit()}; {@link #close()} without a commit throws the build away.
+     * thread-safe and cheap: listings are collected in batches of {@value #BATCH} and analysed and
+     * added by the writer's own threads (one per processor), so even one large feed read by one
+     * thread is indexed on every core; at most two batches per thread wait, which bounds memory.
+     * Lucene buffers documents in RAM and flushes large segments. Nothing becomes visible until
+     * {@link #commit()}; {@link #close()} without a commit throws the build away.
      */
     public static final class Writer implements Consumer<Listing>, Closeable {
+        static final int BATCH = 256;
         private final Path dir;
         private final Path building;
         private final IndexWriter writer;
-        private final AtomicLong seq = new AtomicLong();
+        private final AtomicLong added = new AtomicLong();
+        private final java.util.concurrent.ExecutorService pool;
+        private final java.util.concurrent.Semaphore slots;
+        private final int threads;
+        private final Object lock = new Object();
+        private final java.util.concurrent.atomic.AtomicReference<Throwable> failure = new java.util.concurrent.atomic.AtomicReference<>();
+        private List<Listing> batch = new ArrayList<>(BATCH);
         private boolean finished;
 
         private Writer(Path dir, Analyzer analyzer) throws IOException {
@@ -318,24 +328,94 @@ public final class EvidenceIndex implements Closeable {
                     .setUseCompoundFile(false)
                     .setCommitOnClose(false);
             this.writer = new IndexWriter(FSDirectory.open(building), cfg);
+            this.threads = Runtime.getRuntime().availableProcessors();
+            this.slots = new java.util.concurrent.Semaphore(threads * 2);
+            java.util.concurrent.atomic.AtomicInteger no = new java.util.concurrent.atomic.AtomicInteger();
+            this.pool = java.util.concurrent.Executors.newFixedThreadPool(threads, r -> {
+                Thread t = new Thread(r, "sheaf-evidence-" + no.incrementAndGet());
+                t.setDaemon(true);
+                return t;
+            });
         }
 
-        /** Adds one listing. Listings without fields are skipped. */
+        /**
+         * Queues one listing for the index (listings without fields are skipped).
+         *
+         * @throws IOException when an earlier batch could not be written (the build is then unusable)
+         */
         public void add(Listing l) throws IOException {
-            List<Field> fields = l.fields();
-            if (fields.isEmpty()) {
+            rethrow();
+            if (l.fields().isEmpty()) {
                 return;
             }
+            List<Listing> full = null;
+            synchronized (lock) {
+                if (finished) {
+                    throw new IllegalStateException("this evidence index build was already committed or closed");
+                }
+                batch.add(l);
+                if (batch.size() >= BATCH) {
+                    full = batch;
+                    batch = new ArrayList<>(BATCH);
+                }
+            }
+            if (full != null) {
+                submit(full);
+            }
+        }
+
+        private void submit(List<Listing> listings) {
+            slots.acquireUninterruptibly();
+            pool.execute(() -> {
+                try {
+                    if (failure.get() == null) {
+                        for (Listing l : listings) {
+                            writer.addDocument(document(l));
+                            added.incrementAndGet();
+                        }
+                    }
+                } catch (IOException | RuntimeException e) {
+                    failure.compareAndSet(null, e);
+                } finally {
+                    slots.release();
+                }
+            });
+        }
+
+        private static Document document(Listing l) {
             Document d = new Document();
-            for (Field f : fields) {
+            for (Field f : l.fields()) {
                 d.add(new org.apache.lucene.document.Field(TEXT, f.text(), TEXT_TYPE));
                 d.add(new StoredField(FIELD, f.kind().label() + SEP + f.key() + SEP + f.text()));
             }
             d.add(new StoredField(META, l.id() + SEP + l.category() + SEP + l.source() + SEP + l.locator()));
             d.add(new StringField(ID, l.id(), org.apache.lucene.document.Field.Store.NO));
             d.add(new SortedDocValuesField(LISTING_ID, new BytesRef(l.id())));
-            writer.addDocument(d);
-            seq.incrementAndGet();
+            return d;
+        }
+
+        private void rethrow() throws IOException {
+            Throwable t = failure.get();
+            if (t instanceof IOException e) {
+                throw new IOException("writing the evidence index in " + building + " failed: " + e.getMessage(), e);
+            }
+            if (t instanceof RuntimeException e) {
+                throw e;
+            }
+        }
+
+        /** Waits until every queued batch is written. */
+        private void drain() {
+            List<Listing> rest;
+            synchronized (lock) {
+                rest = batch;
+                batch = new ArrayList<>();
+            }
+            if (!rest.isEmpty()) {
+                submit(rest);
+            }
+            slots.acquireUninterruptibly(threads * 2);
+            slots.release(threads * 2);
         }
 
         /** {@link #add} for use as an ingest sink; an I/O failure becomes an {@link UncheckedIOException}. */
@@ -348,17 +428,28 @@ public final class EvidenceIndex implements Closeable {
             }
         }
 
-        /** Listings added so far. */
+        /** Listings written so far (queued ones are counted once written). */
         public long added() {
-            return seq.get();
+            return added.get();
         }
 
         /** Finishes the build and makes it the current index; older generations are removed. */
         public void commit() throws IOException {
-            if (finished) {
-                throw new IllegalStateException("this evidence index build was already committed or closed");
+            drain();
+            synchronized (lock) {
+                if (finished) {
+                    throw new IllegalStateException("this evidence index build was already committed or closed");
+                }
+                finished = true;
             }
-            finished = true;
+            pool.shutdown();
+            try {
+                rethrow();
+            } catch (IOException | RuntimeException e) {
+                writer.rollback();
+                deleteTree(building);
+                throw e;
+            }
             writer.commit();
             writer.close();
             int next = 1;
@@ -390,10 +481,17 @@ public final class EvidenceIndex implements Closeable {
         /** Without a prior {@link #commit()}, discards the build; the current index is untouched. */
         @Override
         public void close() throws IOException {
-            if (finished) {
-                return;
+            synchronized (lock) {
+                if (finished) {
+                    return;
+                }
+                finished = true;
+                batch = new ArrayList<>();
             }
-            finished = true;
+            failure.compareAndSet(null, new IllegalStateException("build closed"));
+            slots.acquireUninterruptibly(threads * 2);
+            slots.release(threads * 2);
+            pool.shutdown();
             try {
                 writer.rollback();
             } finally {
