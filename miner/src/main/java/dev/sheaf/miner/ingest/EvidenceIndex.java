@@ -216,30 +216,44 @@ public final class EvidenceIndex implements Closeable {
         }
         List<FixedBitSet> perLeaf = new ArrayList<>();
         List<SortedDocValues> values = new ArrayList<>();
-        searcher.search(q, new SimpleCollector() {
-            private SortedDocValues ids;
-            private FixedBitSet ords;
-
+        // Per segment, the set of id ordinals that match; ordinals sort like the ids, so the
+        // smallest ids are the first set bits. One collector: the searcher has no executor.
+        searcher.search(q, new org.apache.lucene.search.CollectorManager<SimpleCollector, Void>() {
             @Override
-            protected void doSetNextReader(LeafReaderContext ctx) throws IOException {
-                ids = ctx.reader().getSortedDocValues(LISTING_ID);
-                ords = ids == null ? null : new FixedBitSet(Math.max(1, ids.getValueCount()));
-                if (ids != null) {
-                    perLeaf.add(ords);
-                    values.add(ids);
-                }
+            public SimpleCollector newCollector() {
+                return new SimpleCollector() {
+                    private SortedDocValues ids;
+                    private FixedBitSet ords;
+
+                    @Override
+                    protected void doSetNextReader(LeafReaderContext ctx) throws IOException {
+                        ids = ctx.reader().getSortedDocValues(LISTING_ID);
+                        ords = ids == null ? null : new FixedBitSet(Math.max(1, ids.getValueCount()));
+                        if (ids != null) {
+                            synchronized (perLeaf) {
+                                perLeaf.add(ords);
+                                values.add(ids);
+                            }
+                        }
+                    }
+
+                    @Override
+                    public void collect(int doc) throws IOException {
+                        if (ids != null && ids.advanceExact(doc)) {
+                            ords.set(ids.ordValue());
+                        }
+                    }
+
+                    @Override
+                    public ScoreMode scoreMode() {
+                        return ScoreMode.COMPLETE_NO_SCORES;
+                    }
+                };
             }
 
             @Override
-            public void collect(int doc) throws IOException {
-                if (ids != null && ids.advanceExact(doc)) {
-                    ords.set(ids.ordValue());
-                }
-            }
-
-            @Override
-            public ScoreMode scoreMode() {
-                return ScoreMode.COMPLETE_NO_SCORES;
+            public Void reduce(java.util.Collection<SimpleCollector> collectors) {
+                return null;
             }
         });
         TreeSet<String> smallest = new TreeSet<>();

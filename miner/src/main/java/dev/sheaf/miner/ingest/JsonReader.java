@@ -12,7 +12,6 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.BufferedReader;
 import java.io.IOException;
 import java.util.ArrayList;
-import java.util.Iterator;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
@@ -216,8 +215,7 @@ final class JsonReader implements ListingReader {
             }
             if (m.specsFromAllOthers()) {
                 Set<String> mapped = m.mappedNames();
-                for (Iterator<Map.Entry<String, JsonNode>> it = o.fields(); it.hasNext(); ) {
-                    Map.Entry<String, JsonNode> e = it.next();
+                for (Map.Entry<String, JsonNode> e : o.properties()) {
                     if (!mapped.contains(e.getKey())) {
                         specs(e.getKey(), e.getValue(), ColumnMapping.isSpecContainerName(e.getKey()), fields);
                     }
@@ -250,8 +248,7 @@ final class JsonReader implements ListingReader {
                 return;
             }
             if (v.isObject()) {
-                for (Iterator<Map.Entry<String, JsonNode>> it = v.fields(); it.hasNext(); ) {
-                    Map.Entry<String, JsonNode> e = it.next();
+                for (Map.Entry<String, JsonNode> e : v.properties()) {
                     specs(container ? e.getKey() : name + "." + e.getKey(), e.getValue(), false, out);
                 }
             } else if (v.isArray()) {
