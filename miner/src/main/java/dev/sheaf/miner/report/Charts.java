@@ -62,6 +62,8 @@ import org.jfree.data.xy.YIntervalSeriesCollection;
 public final class Charts {
     /** Most facets shown separately in the flags chart; the rest are summed as "other facets". */
     static final int MAX_FLAG_SERIES = 7;
+    /** Longest label a chart shows, in characters. */
+    static final int MAX_LABEL = 36;
     private static final FontRenderContext FRC = new FontRenderContext(new AffineTransform(), true, true);
 
     private Charts() {
@@ -102,16 +104,18 @@ public final class Charts {
         DefaultXYZDataset dataset = new DefaultXYZDataset();
         dataset.addSeries("fill rate", data);
 
-        SymbolAxis x = new SymbolAxis(null, categoryList.toArray(String[]::new));
-        SymbolAxis y = new SymbolAxis(null, facetList.toArray(String[]::new));
+        List<String> categoryLabels = shorten(categoryList);
+        List<String> facetLabels = shorten(facetList);
+        SymbolAxis x = new SymbolAxis(null, categoryLabels.toArray(String[]::new));
+        SymbolAxis y = new SymbolAxis(null, facetLabels.toArray(String[]::new));
         HeatScale scale = new HeatScale();
         LabelledBlocks renderer = new LabelledBlocks(data[2], scale);
         XYPlot plot = new XYPlot(dataset, x, y, renderer);
         JFreeChart chart = new JFreeChart(null, ChartStyle.TICK, plot, false);
         ChartStyle.apply(chart);
 
-        double columnWidth = (ChartStyle.WIDTH - 40 - longest(facetList, ChartStyle.TICK)) / categoryList.size();
-        boolean vertical = longest(categoryList, ChartStyle.TICK) + 8 > columnWidth;
+        double columnWidth = (ChartStyle.WIDTH - 40 - longest(facetLabels, ChartStyle.TICK)) / categoryList.size();
+        boolean vertical = longest(categoryLabels, ChartStyle.TICK) + 8 > columnWidth;
         for (SymbolAxis a : new SymbolAxis[] {x, y}) {
             a.setGridBandsVisible(false);
             a.setAxisLineVisible(false);
@@ -159,7 +163,7 @@ public final class Charts {
         legend.setMargin(new RectangleInsets(14, 180, 0, 180));
         chart.addSubtitle(legend);
 
-        double top = vertical ? longest(categoryList, ChartStyle.TICK) + 16 : 26;
+        double top = vertical ? longest(categoryLabels, ChartStyle.TICK) + 16 : 26;
         int height = (int) Math.ceil(top + 34.0 * facetList.size() + 78);
         return ChartStyle.svg(chart, id, ChartStyle.WIDTH, height);
     }
@@ -281,7 +285,7 @@ public final class Charts {
         styleValueAxis(x);
         styleValueAxis(y);
         r.setSeriesPaint(0, ChartStyle.SERIES[0]);
-        r.setSeriesStroke(0, new BasicStroke(2.2f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND));
+        r.setSeriesStroke(0, new BasicStroke(2.25f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND));
         r.setSeriesShape(0, ChartStyle.dot(6));
         plot.setDomainGridlinesVisible(false);
         if (mark > 0) {
@@ -316,10 +320,15 @@ public final class Charts {
         AgreementThresholds t = report.thresholds();
         Map<AgreementVerdict, YIntervalSeries> byVerdict = new EnumMap<>(AgreementVerdict.class);
         String[] names = new String[attributes.size()];
+        List<String> shown = new ArrayList<>();
+        for (AgreementAttribute a : attributes) {
+            shown.add(labels.getOrDefault(a.attribute(), a.attribute()));
+        }
+        shown = shorten(shown);
         double low = 0;
         for (int i = 0; i < attributes.size(); i++) {
             AgreementAttribute a = attributes.get(i);
-            String label = labels.getOrDefault(a.attribute(), a.attribute());
+            String label = shown.get(i);
             double alpha = a.alpha().alpha();
             if (!a.alpha().defined()) {
                 names[i] = label + " \u00b7 \u03b1 n/a";
@@ -429,11 +438,17 @@ public final class Charts {
         }
         DefaultCategoryDataset dataset = new DefaultCategoryDataset();
         Set<String> seen = new java.util.HashSet<>();
+        List<String> names = new ArrayList<>();
         for (DirectionAgreement d : rows) {
             if (!seen.add(d.attribute())) {
                 throw new IllegalArgumentException("attribute '" + d.attribute() + "' occurs twice; give each attribute once");
             }
-            String label = d.attribute() + " \u00b7 " + (d.mentions() == 0 ? "no checked mentions"
+            names.add(d.attribute());
+        }
+        names = shorten(names);
+        for (int i = 0; i < rows.size(); i++) {
+            DirectionAgreement d = rows.get(i);
+            String label = names.get(i) + " \u00b7 " + (d.mentions() == 0 ? "no checked mentions"
                     : Numbers.percent(d.share()) + " of " + Numbers.count(d.mentions()));
             dataset.addValue(d.mentions() == 0 ? null : (Number) d.share(), "agreeing", label);
         }
@@ -479,8 +494,9 @@ public final class Charts {
         Map<String, Map<FlagKind, Integer>> shown = new LinkedHashMap<>();
         boolean folded = facets.size() > MAX_FLAG_SERIES + 1;
         int keep = folded ? MAX_FLAG_SERIES : facets.size();
-        for (String f : facets.subList(0, keep)) {
-            shown.put(f, byFacet.get(f));
+        List<String> kept = shorten(facets.subList(0, keep));
+        for (int i = 0; i < keep; i++) {
+            shown.put(kept.get(i), byFacet.get(facets.get(i)));
         }
         String otherName = null;
         if (folded) {
@@ -566,6 +582,28 @@ public final class Charts {
         a.setTickMarksVisible(false);
         a.setMaximumCategoryLabelWidthRatio(0.45f);
         a.setMaximumCategoryLabelLines(2);
+    }
+
+    /**
+     * Labels as a chart shows them: at most {@value #MAX_LABEL} characters (longer ones end in an
+     * ellipsis; the tables carry them in full), made distinct again by a number when cutting made
+     * two equal, since a label is also the key of its bar.
+     */
+    static List<String> shorten(List<String> labels) {
+        List<String> out = new ArrayList<>(labels.size());
+        Set<String> used = new java.util.HashSet<>();
+        for (String l : labels) {
+            String s = l.strip().replaceAll("\\s+", " ");
+            if (s.codePointCount(0, s.length()) > MAX_LABEL) {
+                s = s.substring(0, s.offsetByCodePoints(0, MAX_LABEL - 1)).stripTrailing() + "\u2026";
+            }
+            String unique = s;
+            for (int n = 2; !used.add(unique); n++) {
+                unique = s + " (" + n + ")";
+            }
+            out.add(unique);
+        }
+        return out;
     }
 
     /** Width of the widest label in this font, in SVG user units. */
