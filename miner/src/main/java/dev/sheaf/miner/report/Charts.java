@@ -141,7 +141,6 @@ public final class Charts {
         renderer.setDefaultItemLabelFont(ChartStyle.TICK);
         renderer.setDefaultItemLabelGenerator((XYDataset d, int series, int item) -> Numbers.format(data[2][item], ValueKind.SHARE));
         renderer.setDefaultPositiveItemLabelPosition(new ItemLabelPosition(ItemLabelAnchor.CENTER, TextAnchor.CENTER));
-        renderer.setItemLabelAnchorOffset(0);
 
         NumberAxis legendAxis = new NumberAxis("fill rate: share of the listings the facet applies to that carry a valid value");
         legendAxis.setRange(0, 1);

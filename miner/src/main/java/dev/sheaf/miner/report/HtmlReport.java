@@ -236,7 +236,11 @@ public final class HtmlReport {
                 } else {
                     h.append("<span class=\"name\">").append(Html.escape(a.label())).append("</span>");
                 }
-                h.append("<span class=\"reasons\">").append(Html.escape(String.join("; ", a.reasons()))).append("</span></li>\n");
+                h.append("<ul class=\"reasons\">");
+                for (String reason : a.reasons()) {
+                    h.append("<li>").append(Html.escape(reason)).append("</li>");
+                }
+                h.append("</ul></li>\n");
             }
             h.append("</ol>\n");
             if (attentionFromCards) {
@@ -270,7 +274,8 @@ public final class HtmlReport {
         }
         h.append("<table class=\"sortable\"").append(Html.attr("id", t.id())).append(">\n");
         h.append("<caption>").append(Html.escape(t.caption())).append("<span class=\"count\">")
-                .append(Html.escape(Numbers.count(t.rows().size()) + (t.rows().size() == 1 ? " row" : " rows")))
+                .append(Html.escape(Numbers.count(t.rows().size()) + (t.rows().size() == 1 ? " row" : " rows")
+                        + (longTable ? ", scroll for more" : "")))
                 .append("</span></caption>\n<thead>\n<tr>");
         for (ReportTable.Column c : t.columns()) {
             boolean num = c.kind() != ValueKind.TEXT;
