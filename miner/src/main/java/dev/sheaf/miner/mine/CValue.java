@@ -8,9 +8,13 @@ package dev.sheaf.miner.mine;
  * C-value(a) = log2|a| · f(a) when a is not nested, else log2|a| · (f(a) − (1/|T_a|) Σ_{b∈T_a} f(b)).
  * A term that mostly occurs inside one longer term ("800 fill" inside "800 fill down") is discounted.
  *
- * <p>Termhood, Sheaf's ranking default, is the same nested discount with the length weight
- * log2(|a| + 1), so that single words (weight 1) rank on the same scale as phrases instead of all
- * scoring 0; see docs/decisions/045-default-ranking.md.
+ * <p>Termhood, Sheaf's ranking default, keeps C-value's idea (discount the occurrences a longer
+ * term explains, weight by length) in a form that also ranks single words:
+ * termhood(a) = log2(|a| + 1) · (f(a) − max f(b)) over the n-grams b that extend a by one word at
+ * either end. A word or phrase that only ever occurs inside one longer phrase ("ripstop" inside
+ * "ripstop nylon", "two way" inside "two way zipper") scores 0 and makes way for the phrase;
+ * one used on its own keeps the occurrences no single extension explains. The weight is 1 for a
+ * word, 1.58 for a pair, 2 for three words. See docs/decisions/045-default-ranking.md.
  */
 public final class CValue {
     private static final double LN2 = StrictMath.log(2.0);
@@ -31,12 +35,20 @@ public final class CValue {
         return StrictMath.log(length) / LN2 * adjusted(frequency, nestedSum, nestedCount);
     }
 
-    /** log2(length + 1) · (f − mean nested f); defined for every length ≥ 1. */
-    public static double termhood(int length, long frequency, long nestedSum, int nestedCount) {
+    /**
+     * log2(length + 1) · (f − f of the most frequent one-word extension); defined for every length ≥ 1.
+     *
+     * @param maxExtension frequency of the most frequent n-gram that extends the term by one word, 0 if none
+     */
+    public static double termhood(int length, long frequency, long maxExtension) {
         if (length < 1) {
             throw new IllegalArgumentException("termhood needs length >= 1, got " + length);
         }
-        return StrictMath.log(length + 1) / LN2 * adjusted(frequency, nestedSum, nestedCount);
+        if (maxExtension < 0 || maxExtension > frequency) {
+            throw new IllegalArgumentException("an extension occurs at most as often as the term: f=" + frequency
+                    + ", extension f=" + maxExtension);
+        }
+        return StrictMath.log(length + 1) / LN2 * (double) (frequency - maxExtension);
     }
 
     private static double adjusted(long frequency, long nestedSum, int nestedCount) {

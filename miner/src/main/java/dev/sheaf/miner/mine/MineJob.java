@@ -293,7 +293,10 @@ final class MineJob {
 
         Harvest run() throws InterruptedException {
             mergeUnigrams();
-            for (int n = 2; n <= maxN; n++) {
+            // one length beyond the longest candidate is counted too, only so that C-value nesting sees
+            // a fragment of a longer fixed phrase ("returns within 30" inside "free returns within 30")
+            int countTo = Math.min(maxN + 1, HarvestOptions.MAX_NGRAM);
+            for (int n = 2; n <= countTo; n++) {
                 progress.phase("counting " + n + "-grams");
                 countLevel(n);
                 levelsCounted = n;
@@ -456,7 +459,7 @@ final class MineJob {
             int[][] candOf = new int[maxN + 1][];
             candOf[1] = new int[vocab];
             Arrays.fill(candOf[1], -1);
-            for (int m = 2; m <= levelsCounted; m++) {
+            for (int m = 2; m <= candidateLevels(); m++) {
                 candOf[m] = new int[levels[m].size];
                 Arrays.fill(candOf[m], -1);
             }
@@ -534,7 +537,7 @@ final class MineJob {
                                     hit(candOf[1][id], w.index, index, from + j, stamp, cat, key, part, lastStamp);
                                 }
                             }
-                            for (int m = 2; m <= levelsCounted && m <= segLen; m++) {
+                            for (int m = 2; m <= candidateLevels() && m <= segLen; m++) {
                                 FrequentTable t = levels[m];
                                 int[] co = candOf[m];
                                 for (int j = 0; j + m <= segLen; j++) {
@@ -623,6 +626,11 @@ final class MineJob {
 
         int levelsCounted() {
             return levelsCounted;
+        }
+
+        /** The longest candidate length that was counted (the last counted level may be context only). */
+        int candidateLevels() {
+            return Math.min(levelsCounted, maxN);
         }
 
         FrequentTable level(int n) {

@@ -9,9 +9,10 @@ import java.util.stream.Collectors;
 /** A score candidates can be ranked by ({@code --rank-by}). */
 public enum Score {
     /**
-     * The default: C-value's nested-frequency termhood extended to single words,
-     * log2(n + 1) · (f − mean frequency of the longer candidates that contain the term). See
-     * docs/decisions/045-default-ranking.md for why it puts attribute phrases first.
+     * The default: log2(n + 1) · (f − frequency of the term's most frequent one-word extension), a
+     * C-value-style discount for words and phrases that only occur inside a longer phrase
+     * ({@link CValue#termhood}). See docs/decisions/045-default-ranking.md for why it puts attribute
+     * phrases first.
      */
     TERMHOOD("termhood"),
     /** Occurrences (term frequency). */

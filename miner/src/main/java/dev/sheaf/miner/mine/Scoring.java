@@ -27,6 +27,8 @@ final class Scoring {
     /** Nested frequency sums and counts per level and index (for C-value and termhood). */
     private final long[][] nestedSum;
     private final int[][] nestedCount;
+    /** Per level and index: frequency of the most frequent one-word-longer extension (for termhood). */
+    private final int[][] maxExtension;
 
     private final boolean[] letter;
     private final boolean[] number;
@@ -46,6 +48,7 @@ final class Scoring {
         this.listings = c.listings();
         this.nestedSum = new long[maxLevel + 1][];
         this.nestedCount = new int[maxLevel + 1][];
+        this.maxExtension = new int[maxLevel + 1][];
         String[] terms = c.terms();
         letter = new boolean[terms.length];
         number = new boolean[terms.length];
@@ -140,13 +143,19 @@ final class Scoring {
         poolSize = size;
     }
 
-    /** For every pool n-gram b of length ≥ 2, each distinct shorter n-gram a inside it gets f(b) and one more container. */
+    /**
+     * For every pool n-gram b of length ≥ 2, each distinct shorter n-gram a inside it gets f(b) and
+     * one more container (C-value), and its two one-word-shorter parts learn f(b) as a candidate for
+     * their most frequent extension (termhood).
+     */
     private void nest() {
         nestedSum[1] = new long[c.vocab()];
         nestedCount[1] = new int[c.vocab()];
+        maxExtension[1] = new int[c.vocab()];
         for (int m = 2; m <= maxLevel; m++) {
             nestedSum[m] = new long[c.level(m).size];
             nestedCount[m] = new int[c.level(m).size];
+            maxExtension[m] = new int[c.level(m).size];
         }
         int[] t = new int[HarvestOptions.MAX_NGRAM];
         long[] seen = new long[32];
@@ -178,6 +187,9 @@ final class Scoring {
                     seen[nSeen++] = key;
                     nestedSum[len][idx] += fb;
                     nestedCount[len][idx]++;
+                    if (len == m - 1 && fb > maxExtension[len][idx]) {
+                        maxExtension[len][idx] = (int) fb;
+                    }
                 }
             }
         }
@@ -190,6 +202,9 @@ final class Scoring {
         int s = 0;
         for (int p = 0; p < poolSize; p++) {
             int m = pLevel[p];
+            if (m > o.ngramMax()) {
+                continue; // counted for nesting only
+            }
             int idx = pIdx[p];
             long df = c.df(m, idx);
             if ((double) df / (double) listings > o.maxDfShare()) {
@@ -198,19 +213,18 @@ final class Scoring {
             c.tokensOf(m, idx, t);
             if (o.dropNumbers() || o.dropQuantities()) {
                 boolean anyLetter = false;
-                boolean anyNumber = false;
                 boolean anyUnit = false;
                 boolean allQuantity = true;
                 for (int i = 0; i < m; i++) {
                     anyLetter |= letter[t[i]];
-                    anyNumber |= number[t[i]];
                     anyUnit |= unit[t[i]];
                     allQuantity &= number[t[i]] || unit[t[i]];
                 }
                 if (o.dropNumbers() && !anyLetter) {
                     continue;
                 }
-                if (o.dropQuantities() && allQuantity && anyNumber && anyUnit) {
+                // numbers and units only ("1.2 kg", "kg", "10,000 mm"): quantities, harvested from spec values
+                if (o.dropQuantities() && allQuantity && anyUnit) {
                     continue;
                 }
             }
@@ -368,7 +382,7 @@ final class Scoring {
     }
 
     private double termhood(int m, int idx) {
-        return CValue.termhood(m, c.tf(m, idx), nestedSum[m][idx], nestedCount[m][idx]);
+        return CValue.termhood(m, c.tf(m, idx), maxExtension[m][idx]);
     }
 
     // ------------------------------------------------------------------ the harvest
