@@ -21,7 +21,6 @@ import java.util.stream.Stream;
 import org.apache.lucene.analysis.Analyzer;
 import org.apache.lucene.document.Document;
 import org.apache.lucene.document.FieldType;
-import org.apache.lucene.document.NumericDocValuesField;
 import org.apache.lucene.document.SortedDocValuesField;
 import org.apache.lucene.document.StoredField;
 import org.apache.lucene.document.StringField;
@@ -30,7 +29,6 @@ import org.apache.lucene.index.IndexOptions;
 import org.apache.lucene.index.IndexWriter;
 import org.apache.lucene.index.IndexWriterConfig;
 import org.apache.lucene.index.LeafReaderContext;
-import org.apache.lucene.index.NumericDocValues;
 import org.apache.lucene.index.ReaderUtil;
 import org.apache.lucene.index.SortedDocValues;
 import org.apache.lucene.index.StoredFields;
@@ -55,11 +53,14 @@ import org.apache.lucene.util.QueryBuilder;
  * context"), "how many listings say this" and "which listings" come back at once on a large
  * catalog instead of a rescan of the files. It is derived data: deleting it loses nothing.
  *
- * <p>Layout: one Lucene document per listing field, the fields of a listing added together as one
- * block (so they stay adjacent, in field order, through merges). Each holds the field text indexed
- * with positions and offsets (analysed by the caller's {@link Analyzer}), the field kind, spec key
- * and text stored, the listing id as sorted doc values, and a listing sequence number; the first
- * field of a listing also stores the listing's id, category, source and locator.
+ * <p>Layout: one Lucene document per listing. Each listing field is one value of the multi-valued
+ * {@code text} field, indexed with positions and offsets by the caller's {@link Analyzer}, wrapped
+ * so that a phrase never matches across two fields (a position gap of {@value #FIELD_GAP}) and
+ * values' offsets follow each other without a gap: value {@code i} starts at the sum of the
+ * lengths of the values before it, which maps a match back to its field and to offsets in that
+ * field's text. Each field's kind, spec key and text are stored in field order; the listing's id,
+ * category, source and locator are stored once; the id is also kept as sorted doc values (result
+ * order) and as an indexed keyword.
  *
  * <p>A build goes into a fresh {@code building-*} folder next to the current index; only when
  * {@link Writer#commit()} succeeds is it renamed to {@code index-N} and named in the file
@@ -77,9 +78,9 @@ public final class EvidenceIndex implements Closeable {
     private static final String FIELD = "f";
     private static final String META = "m";
     private static final String LISTING_ID = "lid";
-    private static final String SEQ = "seq";
+    /** Positions between two fields of one listing, so no phrase spans them. */
+    static final int FIELD_GAP = 100;
     private static final String ID = "id";
-    private static final String KIND = "kind";
     private static final String CURRENT = "CURRENT";
     private static final char SEP = '\u001f';
     private static final FieldType TEXT_TYPE = new FieldType();
@@ -170,17 +171,28 @@ public final class EvidenceIndex implements Closeable {
             if (it == null) {
                 continue;
             }
-            String[] f = split(stored.document(sd.doc).get(FIELD), 4);
-            int fieldIndex = Integer.parseInt(f[0]);
-            String[] meta = split(stored.document(sd.doc - fieldIndex).get(META), 4);
+            Document doc = stored.document(sd.doc);
+            String[] meta = split(doc.get(META), 4);
+            String[] packed = doc.getValues(FIELD);
+            String[][] fields = new String[packed.length][];
+            int[] base = new int[packed.length + 1];
+            for (int i = 0; i < packed.length; i++) {
+                fields[i] = split(packed[i], 3);
+                base[i + 1] = base[i] + fields[i][2].length();
+            }
+            int f = 0;
             while (it.next() && out.size() < limit) {
                 int s = it.startOffset();
                 int e = it.endOffset();
-                if (s < 0 || e > f[3].length()) {
-                    throw new IllegalStateException("the evidence index in " + folder + " has no offsets for '" + phrase
-                            + "'; rebuild it");
+                while (f + 1 < packed.length && s >= base[f + 1]) {
+                    f++;
                 }
-                out.add(EvidenceLine.cut(meta[0], meta[2], meta[3], f[1], f[2], f[3], s, e, contextChars));
+                if (s < base[f] || e > base[f + 1]) {
+                    throw new IllegalStateException("the evidence index in " + folder + " has offsets that do not fit its stored text ("
+                            + s + ".." + e + " for '" + phrase + "'); was it built with another analyzer? Rebuild it");
+                }
+                String[] fv = fields[f];
+                out.add(EvidenceLine.cut(meta[0], meta[2], meta[3], fv[0], fv[1], fv[2], s - base[f], e - base[f], contextChars));
             }
             if (out.size() >= limit) {
                 break;
@@ -204,30 +216,44 @@ public final class EvidenceIndex implements Closeable {
         }
         List<FixedBitSet> perLeaf = new ArrayList<>();
         List<SortedDocValues> values = new ArrayList<>();
-        searcher.search(q, new SimpleCollector() {
-            private SortedDocValues ids;
-            private FixedBitSet ords;
-
+        // Per segment, the set of id ordinals that match; ordinals sort like the ids, so the
+        // smallest ids are the first set bits. One collector: the searcher has no executor.
+        searcher.search(q, new org.apache.lucene.search.CollectorManager<SimpleCollector, Void>() {
             @Override
-            protected void doSetNextReader(LeafReaderContext ctx) throws IOException {
-                ids = ctx.reader().getSortedDocValues(LISTING_ID);
-                ords = ids == null ? null : new FixedBitSet(Math.max(1, ids.getValueCount()));
-                if (ids != null) {
-                    perLeaf.add(ords);
-                    values.add(ids);
-                }
+            public SimpleCollector newCollector() {
+                return new SimpleCollector() {
+                    private SortedDocValues ids;
+                    private FixedBitSet ords;
+
+                    @Override
+                    protected void doSetNextReader(LeafReaderContext ctx) throws IOException {
+                        ids = ctx.reader().getSortedDocValues(LISTING_ID);
+                        ords = ids == null ? null : new FixedBitSet(Math.max(1, ids.getValueCount()));
+                        if (ids != null) {
+                            synchronized (perLeaf) {
+                                perLeaf.add(ords);
+                                values.add(ids);
+                            }
+                        }
+                    }
+
+                    @Override
+                    public void collect(int doc) throws IOException {
+                        if (ids != null && ids.advanceExact(doc)) {
+                            ords.set(ids.ordValue());
+                        }
+                    }
+
+                    @Override
+                    public ScoreMode scoreMode() {
+                        return ScoreMode.COMPLETE_NO_SCORES;
+                    }
+                };
             }
 
             @Override
-            public void collect(int doc) throws IOException {
-                if (ids != null && ids.advanceExact(doc)) {
-                    ords.set(ids.ordValue());
-                }
-            }
-
-            @Override
-            public ScoreMode scoreMode() {
-                return ScoreMode.COMPLETE_NO_SCORES;
+            public Void reduce(java.util.Collection<SimpleCollector> collectors) {
+                return null;
             }
         });
         TreeSet<String> smallest = new TreeSet<>();
@@ -249,36 +275,7 @@ public final class EvidenceIndex implements Closeable {
     }
 
     private long countDistinct(Query q) throws IOException {
-        AtomicLong n = new AtomicLong();
-        searcher.search(q, new SimpleCollector() {
-            private NumericDocValues seq;
-            private long last;
-            private boolean any;
-
-            @Override
-            protected void doSetNextReader(LeafReaderContext ctx) throws IOException {
-                seq = ctx.reader().getNumericDocValues(SEQ);
-                any = false; // a listing's block never spans two segments
-            }
-
-            @Override
-            public void collect(int doc) throws IOException {
-                if (seq != null && seq.advanceExact(doc)) {
-                    long v = seq.longValue();
-                    if (!any || v != last) {
-                        n.incrementAndGet();
-                        last = v;
-                        any = true;
-                    }
-                }
-            }
-
-            @Override
-            public ScoreMode scoreMode() {
-                return ScoreMode.COMPLETE_NO_SCORES;
-            }
-        });
-        return n.get();
+        return searcher.count(q);
     }
 
     private Query query(String phrase) {
@@ -314,14 +311,24 @@ public final class EvidenceIndex implements Closeable {
 
     /**
      * Builds a new index generation. {@link #add} (or {@link #accept}, usable as an ingest sink) is
-     * thread-safe; documents are buffered in RAM and flushed in large segments. Nothing becomes
-     * visible until {@link #commit()}; {@link #close()} without a commit throws the build away.
+     * thread-safe and cheap: listings are collected in batches of {@value #BATCH} and analysed and
+     * added by the writer's own threads (one per processor), so even one large feed read by one
+     * thread is indexed on every core; at most two batches per thread wait, which bounds memory.
+     * Lucene buffers documents in RAM and flushes large segments. Nothing becomes visible until
+     * {@link #commit()}; {@link #close()} without a commit throws the build away.
      */
     public static final class Writer implements Consumer<Listing>, Closeable {
+        static final int BATCH = 256;
         private final Path dir;
         private final Path building;
         private final IndexWriter writer;
-        private final AtomicLong seq = new AtomicLong();
+        private final AtomicLong added = new AtomicLong();
+        private final java.util.concurrent.ExecutorService pool;
+        private final java.util.concurrent.Semaphore slots;
+        private final int threads;
+        private final Object lock = new Object();
+        private final java.util.concurrent.atomic.AtomicReference<Throwable> failure = new java.util.concurrent.atomic.AtomicReference<>();
+        private List<Listing> batch = new ArrayList<>(BATCH);
         private boolean finished;
 
         private Writer(Path dir, Analyzer analyzer) throws IOException {
@@ -329,38 +336,100 @@ public final class EvidenceIndex implements Closeable {
             this.dir = dir.toAbsolutePath().normalize();
             Files.createDirectories(this.dir);
             this.building = Files.createTempDirectory(this.dir, "building-");
-            IndexWriterConfig cfg = new IndexWriterConfig(analyzer)
+            IndexWriterConfig cfg = new IndexWriterConfig(new FieldGaps(analyzer))
                     .setOpenMode(IndexWriterConfig.OpenMode.CREATE)
                     .setRAMBufferSizeMB(128)
                     .setUseCompoundFile(false)
                     .setCommitOnClose(false);
             this.writer = new IndexWriter(FSDirectory.open(building), cfg);
+            this.threads = Runtime.getRuntime().availableProcessors();
+            this.slots = new java.util.concurrent.Semaphore(threads * 2);
+            java.util.concurrent.atomic.AtomicInteger no = new java.util.concurrent.atomic.AtomicInteger();
+            this.pool = java.util.concurrent.Executors.newFixedThreadPool(threads, r -> {
+                Thread t = new Thread(r, "sheaf-evidence-" + no.incrementAndGet());
+                t.setDaemon(true);
+                return t;
+            });
         }
 
-        /** Adds one listing (its fields as one block). Listings without fields are skipped. */
+        /**
+         * Queues one listing for the index (listings without fields are skipped).
+         *
+         * @throws IOException when an earlier batch could not be written (the build is then unusable)
+         */
         public void add(Listing l) throws IOException {
-            List<Field> fields = l.fields();
-            if (fields.isEmpty()) {
+            rethrow();
+            if (l.fields().isEmpty()) {
                 return;
             }
-            long s = seq.incrementAndGet();
-            BytesRef id = new BytesRef(l.id());
-            List<Document> block = new ArrayList<>(fields.size());
-            for (int i = 0; i < fields.size(); i++) {
-                Field f = fields.get(i);
-                Document d = new Document();
-                d.add(new org.apache.lucene.document.Field(TEXT, f.text(), TEXT_TYPE));
-                d.add(new StoredField(FIELD, i + "" + SEP + f.kind().label() + SEP + f.key() + SEP + f.text()));
-                d.add(new StringField(KIND, f.kind().label(), org.apache.lucene.document.Field.Store.NO));
-                d.add(new SortedDocValuesField(LISTING_ID, id));
-                d.add(new NumericDocValuesField(SEQ, s));
-                if (i == 0) {
-                    d.add(new StoredField(META, l.id() + SEP + l.category() + SEP + l.source() + SEP + l.locator()));
-                    d.add(new StringField(ID, l.id(), org.apache.lucene.document.Field.Store.NO));
+            List<Listing> full = null;
+            synchronized (lock) {
+                if (finished) {
+                    throw new IllegalStateException("this evidence index build was already committed or closed");
                 }
-                block.add(d);
+                batch.add(l);
+                if (batch.size() >= BATCH) {
+                    full = batch;
+                    batch = new ArrayList<>(BATCH);
+                }
             }
-            writer.addDocuments(block);
+            if (full != null) {
+                submit(full);
+            }
+        }
+
+        private void submit(List<Listing> listings) {
+            slots.acquireUninterruptibly();
+            pool.execute(() -> {
+                try {
+                    if (failure.get() == null) {
+                        for (Listing l : listings) {
+                            writer.addDocument(document(l));
+                            added.incrementAndGet();
+                        }
+                    }
+                } catch (IOException | RuntimeException e) {
+                    failure.compareAndSet(null, e);
+                } finally {
+                    slots.release();
+                }
+            });
+        }
+
+        private static Document document(Listing l) {
+            Document d = new Document();
+            for (Field f : l.fields()) {
+                d.add(new org.apache.lucene.document.Field(TEXT, f.text(), TEXT_TYPE));
+                d.add(new StoredField(FIELD, f.kind().label() + SEP + f.key() + SEP + f.text()));
+            }
+            d.add(new StoredField(META, l.id() + SEP + l.category() + SEP + l.source() + SEP + l.locator()));
+            d.add(new StringField(ID, l.id(), org.apache.lucene.document.Field.Store.NO));
+            d.add(new SortedDocValuesField(LISTING_ID, new BytesRef(l.id())));
+            return d;
+        }
+
+        private void rethrow() throws IOException {
+            Throwable t = failure.get();
+            if (t instanceof IOException e) {
+                throw new IOException("writing the evidence index in " + building + " failed: " + e.getMessage(), e);
+            }
+            if (t instanceof RuntimeException e) {
+                throw e;
+            }
+        }
+
+        /** Waits until every queued batch is written. */
+        private void drain() {
+            List<Listing> rest;
+            synchronized (lock) {
+                rest = batch;
+                batch = new ArrayList<>();
+            }
+            if (!rest.isEmpty()) {
+                submit(rest);
+            }
+            slots.acquireUninterruptibly(threads * 2);
+            slots.release(threads * 2);
         }
 
         /** {@link #add} for use as an ingest sink; an I/O failure becomes an {@link UncheckedIOException}. */
@@ -373,17 +442,28 @@ public final class EvidenceIndex implements Closeable {
             }
         }
 
-        /** Listings added so far. */
+        /** Listings written so far (queued ones are counted once written). */
         public long added() {
-            return seq.get();
+            return added.get();
         }
 
         /** Finishes the build and makes it the current index; older generations are removed. */
         public void commit() throws IOException {
-            if (finished) {
-                throw new IllegalStateException("this evidence index build was already committed or closed");
+            drain();
+            synchronized (lock) {
+                if (finished) {
+                    throw new IllegalStateException("this evidence index build was already committed or closed");
+                }
+                finished = true;
             }
-            finished = true;
+            pool.shutdown();
+            try {
+                rethrow();
+            } catch (IOException | RuntimeException e) {
+                writer.rollback();
+                deleteTree(building);
+                throw e;
+            }
             writer.commit();
             writer.close();
             int next = 1;
@@ -415,15 +495,50 @@ public final class EvidenceIndex implements Closeable {
         /** Without a prior {@link #commit()}, discards the build; the current index is untouched. */
         @Override
         public void close() throws IOException {
-            if (finished) {
-                return;
+            synchronized (lock) {
+                if (finished) {
+                    return;
+                }
+                finished = true;
+                batch = new ArrayList<>();
             }
-            finished = true;
+            failure.compareAndSet(null, new IllegalStateException("build closed"));
+            slots.acquireUninterruptibly(threads * 2);
+            slots.release(threads * 2);
+            pool.shutdown();
             try {
                 writer.rollback();
             } finally {
                 deleteTree(building);
             }
+        }
+    }
+
+    /**
+     * The caller's analyzer with a position gap between field values (no phrase across fields) and
+     * no offset gap (so a value's offsets start where the previous value's text ended).
+     */
+    private static final class FieldGaps extends org.apache.lucene.analysis.AnalyzerWrapper {
+        private final Analyzer wrapped;
+
+        FieldGaps(Analyzer wrapped) {
+            super(wrapped.getReuseStrategy());
+            this.wrapped = wrapped;
+        }
+
+        @Override
+        protected Analyzer getWrappedAnalyzer(String fieldName) {
+            return wrapped;
+        }
+
+        @Override
+        public int getPositionIncrementGap(String fieldName) {
+            return FIELD_GAP;
+        }
+
+        @Override
+        public int getOffsetGap(String fieldName) {
+            return 0;
         }
     }
 

@@ -103,7 +103,11 @@ public final class Ingest {
             return this;
         }
 
-        /** Files larger than this are not read ("too-large"); default {@value #DEFAULT_MAX_FILE_BYTES} bytes. */
+        /**
+         * Files read whole (HTML, PDF, DOCX, text) larger than this are not read ("too-large");
+         * streamed feeds (CSV/TSV, JSON, JSON Lines) have no size limit. Default
+         * {@value #DEFAULT_MAX_FILE_BYTES} bytes.
+         */
         public Builder maxFileBytes(long bytes) {
             if (bytes <= 0) {
                 throw new IllegalArgumentException("maxFileBytes must be positive, got " + bytes);
@@ -182,9 +186,10 @@ public final class Ingest {
         });
         Semaphore inFlight = new Semaphore(threads * 4);
         try {
-            for (Planned p : plan(c)) {
+            // Files are handed to the workers while the folders are still being walked.
+            plan(c, p -> {
                 if (c.failure.get() != null) {
-                    break;
+                    return false;
                 }
                 c.filesSeen.incrementAndGet();
                 inFlight.acquireUninterruptibly();
@@ -199,7 +204,8 @@ public final class Ingest {
                         inFlight.release();
                     }
                 });
-            }
+                return true;
+            });
         } finally {
             pool.shutdown();
             awaitQuietly(pool);
@@ -290,8 +296,13 @@ public final class Ingest {
     private record Planned(Path path, SourceSpec spec) {
     }
 
-    /** The files to read, each once, in source order (walked lazily would be nicer; the list holds paths only). */
-    private List<Planned> plan(Counters c) {
+    /** Takes one planned file; false stops the walk. */
+    private interface Plan {
+        boolean take(Planned p);
+    }
+
+    /** Every file to read, each once, in source order; a file named by a source of its own is read by that source. */
+    private void plan(Counters c, Plan out) {
         Map<Path, SourceSpec> explicit = new LinkedHashMap<>();
         for (SourceSpec s : sources) {
             Path p = s.path().toAbsolutePath().normalize();
@@ -299,28 +310,29 @@ public final class Ingest {
                 explicit.putIfAbsent(p, s);
             }
         }
-        List<Planned> out = new ArrayList<>();
         Set<Path> seen = new HashSet<>(explicit.keySet());
         Set<Path> emittedExplicit = new HashSet<>();
         for (SourceSpec s : sources) {
             Path p = s.path().toAbsolutePath().normalize();
             if (Files.isRegularFile(p)) {
-                if (explicit.get(p) == s && emittedExplicit.add(p)) {
-                    out.add(new Planned(p, s));
+                if (explicit.get(p) == s && emittedExplicit.add(p) && !out.take(new Planned(p, s))) {
+                    return;
                 }
             } else if (Files.isDirectory(p)) {
-                walk(p, s, seen, out, c);
+                if (!walk(p, s, seen, out, c)) {
+                    return;
+                }
             } else {
                 c.problem(new Problem(display(s.path()), "", "unreadable", "the source path does not exist or is not a file or folder; "
                         + "check the path (relative paths are resolved against the workspace folder)"));
             }
         }
-        return out;
     }
 
-    private void walk(Path root, SourceSpec s, Set<Path> seen, List<Planned> out, Counters c) {
+    private boolean walk(Path root, SourceSpec s, Set<Path> seen, Plan out, Counters c) {
         List<PathMatcher> include = matchers(s.include());
         List<PathMatcher> exclude = matchers(s.exclude());
+        boolean[] stopped = {false};
         try {
             Files.walkFileTree(root, EnumSet.of(FileVisitOption.FOLLOW_LINKS), Integer.MAX_VALUE, new SimpleFileVisitor<>() {
                 @Override
@@ -337,8 +349,9 @@ public final class Ingest {
                     Path rel = root.relativize(file);
                     if ((include.isEmpty() || matches(include, rel)) && !matches(exclude, rel)) {
                         Path abs = file.toAbsolutePath().normalize();
-                        if (seen.add(abs)) {
-                            out.add(new Planned(abs, s));
+                        if (seen.add(abs) && !out.take(new Planned(abs, s))) {
+                            stopped[0] = true;
+                            return FileVisitResult.TERMINATE;
                         }
                     }
                     return FileVisitResult.CONTINUE;
@@ -356,6 +369,7 @@ public final class Ingest {
         } catch (IOException e) {
             c.problem(new Problem(display(root), "", "unreadable", "the folder cannot be walked: " + e.getMessage()));
         }
+        return !stopped[0];
     }
 
     private static List<PathMatcher> matchers(List<String> globs) {
@@ -396,11 +410,13 @@ public final class Ingest {
             file = new SourceFile(path, shown, size, spec.mapping(), c);
             if (size == 0) {
                 file.problem("", "empty", "the file is empty (0 bytes)");
-            } else if (size > maxFileBytes) {
-                file.problem("", "too-large", "the file has " + size + " bytes, more than the limit of " + maxFileBytes
-                        + "; raise the limit (maxFileBytes) or split the file");
             } else {
                 ListingReader reader = Readers.forFile(file);
+                if (size > maxFileBytes && !reader.streams()) {
+                    file.problem("", "too-large", "the file has " + size + " bytes, more than the limit of " + maxFileBytes
+                            + " for a " + reader.name() + " file, which is read whole; raise the limit or split the file");
+                    return;
+                }
                 try {
                     reader.read(file);
                 } catch (StackOverflowError e) {

@@ -12,7 +12,6 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.BufferedReader;
 import java.io.IOException;
 import java.util.ArrayList;
-import java.util.Iterator;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
@@ -32,6 +31,11 @@ final class JsonReader implements ListingReader {
             .streamReadConstraints(StreamReadConstraints.builder().maxNestingDepth(200).build()).build();
     private static final ObjectMapper MAPPER = new ObjectMapper(FACTORY);
     private static final ObjectReader TREE = MAPPER.reader();
+
+    @Override
+    public boolean streams() {
+        return true;
+    }
 
     @Override
     public String name() {
@@ -216,8 +220,7 @@ final class JsonReader implements ListingReader {
             }
             if (m.specsFromAllOthers()) {
                 Set<String> mapped = m.mappedNames();
-                for (Iterator<Map.Entry<String, JsonNode>> it = o.fields(); it.hasNext(); ) {
-                    Map.Entry<String, JsonNode> e = it.next();
+                for (Map.Entry<String, JsonNode> e : o.properties()) {
                     if (!mapped.contains(e.getKey())) {
                         specs(e.getKey(), e.getValue(), ColumnMapping.isSpecContainerName(e.getKey()), fields);
                     }
@@ -250,8 +253,7 @@ final class JsonReader implements ListingReader {
                 return;
             }
             if (v.isObject()) {
-                for (Iterator<Map.Entry<String, JsonNode>> it = v.fields(); it.hasNext(); ) {
-                    Map.Entry<String, JsonNode> e = it.next();
+                for (Map.Entry<String, JsonNode> e : v.properties()) {
                     specs(container ? e.getKey() : name + "." + e.getKey(), e.getValue(), false, out);
                 }
             } else if (v.isArray()) {

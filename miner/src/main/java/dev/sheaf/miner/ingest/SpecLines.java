@@ -2,7 +2,6 @@ package dev.sheaf.miner.ingest;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
@@ -165,10 +164,5 @@ final class SpecLines {
             t = MD_EMPHASIS.matcher(t).replaceAll("");
         }
         return t.strip();
-    }
-
-    /** Lower-case, ROOT locale: for comparing keys. */
-    static String fold(String s) {
-        return s.toLowerCase(Locale.ROOT);
     }
 }

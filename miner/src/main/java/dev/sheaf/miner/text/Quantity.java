@@ -16,7 +16,8 @@ import java.util.Objects;
  * @param value       the number as written (lower end of a range), in {@code unit}
  * @param dimension   what is measured
  * @param unit        the canonical unit symbol ({@code "kg"}, {@code "fl oz"}, {@code "°F"} ...), as {@link Units#convert} accepts it
- * @param si          {@code value} in the dimension's base unit ({@link Dimension#baseUnit()}), rounded as {@link Units} states
+ * @param si          {@code value} in the dimension's base unit ({@link Dimension#baseUnit()}): the double nearest to the
+ *                    exact value, computed from the number as written and the exact unit factors (docs/decisions/060)
  * @param start       offset of the first char
  * @param end         offset after the last char
  * @param surface     the text as written

@@ -30,6 +30,9 @@ final class QuantityScanner {
             "water resist", "water-resist", "h2o", "h\u2082o"};
     /** A water column read from cue words alone must be at least this many mm: real ratings are 800 mm and up, poles are 8.5 mm. */
     private static final long WATER_CUE_MIN = 500;
+    /** From this many mm on, a bare "mm" value is a water column unless a length cue is near: lengths of 5 m and more are not written in mm in this trade. */
+    private static final long WATER_BARE_MIN = 5000;
+    private static final String[] LENGTH_CUES = {"length", "long", "width", "wide", "height", "tall", "diameter", "dimension", "size"};
     /** Longer numbers are not read: no spec value has 16 significant digits, and 15 keep every value exact in a double. */
     private static final int MAX_DIGITS = 15;
 
@@ -89,6 +92,10 @@ final class QuantityScanner {
             if (isDigit(c) || (c >= '\u00BC' && vulgar(c) != null)) {
                 if (i > 0 && Character.isLetterOrDigit(text.charAt(i - 1))) {
                     i = alnumEnd(i);   // part of a code such as "X200" or "FH-000123b"
+                    continue;
+                }
+                if (i > 0 && (text.charAt(i - 1) == '.' || (text.charAt(i - 1) == ',' && i > 1 && isDigit(text.charAt(i - 2))))) {
+                    i = numberRunEnd(i);   // "v1.2", ".5": the tail of something else, not a number of its own
                     continue;
                 }
                 i = Math.max(i + 1, atNumber(i));
@@ -518,7 +525,7 @@ final class QuantityScanner {
             }
             def = UnitTable.MM_WATER;
             v = v.times(1000);
-        } else if (def == UnitTable.MILLIMETRE && v.compareTo(WATER_CUE_MIN) >= 0 && cueNear(n1.start, u.end, WATER_CUES)) {
+        } else if (def == UnitTable.MILLIMETRE && waterColumn(v, n1.start, u.end)) {
             def = UnitTable.MM_WATER;
         }
         int sign = def.dimension() == Dimension.TEMPERATURE ? signBefore(n1.start) : -1;
@@ -603,7 +610,7 @@ final class QuantityScanner {
             def = UnitTable.MM_WATER;
             lo = lo.times(1000);
             hi = hi.times(1000);
-        } else if (def == UnitTable.MILLIMETRE && lo.compareTo(WATER_CUE_MIN) >= 0 && cueNear(n1.start, u.end, WATER_CUES)) {
+        } else if (def == UnitTable.MILLIMETRE && waterColumn(lo, n1.start, u.end)) {
             def = UnitTable.MM_WATER;
         }
         int start = n1.start;
@@ -737,6 +744,17 @@ final class QuantityScanner {
                     && (dualBefore(start) || dualAfter(end) || cueNear(start, end, TEMPERATURE_CUES));
         }
         return true;
+    }
+
+    /** A plain "mm" value is a water column with a cue from 500 mm, or without one from 5000 mm unless a length cue is near (decision 062). */
+    private boolean waterColumn(QuantityValue v, int start, int end) {
+        if (v.compareTo(WATER_CUE_MIN) < 0) {
+            return false;
+        }
+        if (cueNear(start, end, WATER_CUES)) {
+            return true;
+        }
+        return v.compareTo(WATER_BARE_MIN) >= 0 && !cueNear(start, end, LENGTH_CUES);
     }
 
     private static boolean needsInteger(UnitDef def) {
@@ -967,6 +985,14 @@ final class QuantityScanner {
             q++;
         }
         return q;
+    }
+
+    private int numberRunEnd(int p) {
+        int q = p;
+        while (q < len && (isDigit(text.charAt(q)) || ((text.charAt(q) == '.' || text.charAt(q) == ',') && isDigit(at(q + 1))))) {
+            q++;
+        }
+        return Math.max(q, p + 1);
     }
 
     private int alnumEnd(int p) {

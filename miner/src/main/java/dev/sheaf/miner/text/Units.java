@@ -28,6 +28,7 @@ public final class Units {
     /**
      * Converts {@code value} from one unit to another of the same {@link Dimension}.
      *
+     * @return the converted value (infinite only if it exceeds the double range)
      * @throws IllegalArgumentException if a unit is unknown, the dimensions differ, or value is not finite
      */
     public static double convert(double value, String from, String to) {

@@ -115,6 +115,29 @@ class EvidenceIndexTest {
     }
 
     @Test
+    void offsetsStayExactAfterEmptyAndStopWordOnlyFields(@TempDir Path dir) throws IOException {
+        Listing l = new Listing("E1", "", "s", "", List.of(Field.of(FieldKind.TITLE, "The"), Field.of(FieldKind.BULLET, ""),
+                Field.of(FieldKind.BULLET, "  pocket  "), Field.spec("Zip", "Ünïcode ëdge: two-way zipper, then two-way zipper")));
+        try (EvidenceIndex.Writer w = EvidenceIndex.writer(dir, new StandardAnalyzer(EnglishAnalyzer.ENGLISH_STOP_WORDS_SET))) {
+            w.add(l);
+            w.commit();
+        }
+        try (EvidenceIndex ix = EvidenceIndex.open(dir, new StandardAnalyzer(EnglishAnalyzer.ENGLISH_STOP_WORDS_SET))) {
+            List<EvidenceLine> lines = ix.lines("two-way zipper", 5);
+            String text = l.fields().get(3).text();
+            assertEquals(2, lines.size());
+            assertEquals(text.indexOf("two-way"), lines.get(0).start());
+            assertEquals(text.lastIndexOf("two-way"), lines.get(1).start());
+            for (EvidenceLine e : lines) {
+                assertEquals("Zip", e.key());
+                assertEquals(text.substring(e.start(), e.end()), e.match());
+            }
+            assertEquals(0, ix.count("pocket ünïcode"), "no phrase across two fields");
+            assertEquals(1, ix.count("ünïcode ëdge"));
+        }
+    }
+
+    @Test
     void concurrentWritersIndexEveryListing(@TempDir Path dir) throws IOException {
         List<Listing> many = IntStream.range(0, 2000).mapToObj(i -> new Listing(String.format("L%05d", i), "c", "gen", "line " + i,
                 List.of(Field.of(FieldKind.TITLE, "Item " + i), Field.of(FieldKind.BULLET, i % 10 == 0 ? "two-way zipper" : "plain"))))

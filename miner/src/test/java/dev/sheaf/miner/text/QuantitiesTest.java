@@ -68,6 +68,7 @@ class QuantitiesTest {
             rated to 20 degrees F              | 20 degrees F   | 9  | TEMPERATURE    | °F     | 20      | -6.666666666666667
             3000 mm H2O                        | 3000 mm H2O    | 0  | WATER_COLUMN   | mm H2O | 3000    | 3000
             Fly: 10,000 mm waterproof          | 10,000 mm      | 5  | WATER_COLUMN   | mm H2O | 10000   | 10000
+            rated 1,500 mm HH                  | 1,500 mm       | 6  | WATER_COLUMN   | mm H2O | 1500    | 1500
             a 10k mm fly                       | 10k mm         | 2  | WATER_COLUMN   | mm H2O | 10000   | 10000
             800-fill down                      | 800-fill       | 0  | FILL_POWER     | FP     | 800     | 800
             850 fill power goose down          | 850 fill power | 0  | FILL_POWER     | FP     | 850     | 850
@@ -137,7 +138,7 @@ class QuantitiesTest {
             "1,2 kg", "1,5 L", "weighs 0,85 kg", "1,2345 kg", "1.200,5 kg", "12,34,567 g", "1.2.3 kg",
             "fits 2 in the bag", "a 2-in-1 jacket", "2 in 1", "the \"Ridge 2\" tent", "3D mesh", "Size 10 C",
             "a 10K run", "10,000 mAh", "70 g/m² fabric", "2 m² of floor", "X200 g", "12/05/2024 kg",
-            "the 1.2", "2 great", "9 seasons", "5 fill", "FP 80", "13P", "2 p", "20 D",
+            "the 1.2", "2 great", "9 seasons", "5 fill", "FP 80", "13P", "2 p", "20 D", "model v1.2 kg", ".5 kg",
             "" })
     void findsNoQuantityWhereNoneIsStatedOrTheNotationIsAmbiguous(String text) {
         assertEquals(List.of(), Quantities.find(text));
@@ -300,8 +301,12 @@ class QuantitiesTest {
     }
 
     @Test
-    void millimetresAreAWaterColumnOnlyWithACueASuffixOrTheThousandsForm() {
-        assertEquals(Dimension.LENGTH, only("a 10,000 mm pole run").dimension());
+    void millimetresAreAWaterColumnWithACueASuffixTheThousandsFormOrFromFiveMetres() {
+        assertEquals(Dimension.LENGTH, only("a 2,100 mm inner").dimension());
+        assertEquals(Dimension.WATER_COLUMN, only("a 10,000 mm fly").dimension(), "nobody writes a 10 m length in mm");
+        assertEquals(Dimension.LENGTH, only("ridge length 6000 mm").dimension(), "unless a length cue says so");
+        assertEquals(Dimension.LENGTH, Quantities.parse("Length", "6000 mm").orElseThrow().dimension());
+        assertEquals(Dimension.WATER_COLUMN, Quantities.parse("10,000 mm").orElseThrow().dimension());
         assertEquals(Dimension.WATER_COLUMN, only("10,000 mm HH").dimension());
         assertEquals(Dimension.WATER_COLUMN, only("hydrostatic head of 1,500 mm").dimension());
         // a cue nearby does not turn a pole diameter into a rating: cue-only water columns start at 500 mm
