@@ -20,7 +20,6 @@ import java.util.ArrayList;
 import java.util.Collection;
 import java.util.Collections;
 import java.util.EnumMap;
-import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -69,7 +68,7 @@ public final class Labeler {
     private final boolean[] conceptReview;
 
     private final NumberFacet[] numberFacets;
-    private final Map<String, Integer> specKeyFacet;
+    private final SpecKeyMatcher specKeyFacet;
     private final Map<Dimension, Integer> dimensionFacet;
 
     private final IntOpenHashSet negationIds = new IntOpenHashSet();
@@ -148,7 +147,7 @@ public final class Labeler {
 
         // number facets: their labels are cues in running text and keys in spec tables
         List<NumberFacet> nfs = new ArrayList<>();
-        Map<String, Integer> keys = new HashMap<>();
+        SpecKeyMatcher keys = new SpecKeyMatcher();
         Map<Dimension, Integer> byDim = new EnumMap<>(Dimension.class);
         for (Concept f : vocabulary.facets()) {
             if (f.facet().valueKind() != ValueKind.NUMBER) {
@@ -174,19 +173,16 @@ public final class Labeler {
                     tb.add(path, -(idx + 1));
                     compiled++;
                 }
-                String key = SpecKeyForms.normalise(l.text());
-                if (!key.isEmpty()) {
-                    Integer prev = keys.putIfAbsent(key, idx);
-                    if (prev != null && prev != idx) {
-                        notes.add("spec key \"" + key + "\" is a label of both " + nfs.get(prev).id + " and " + f.id()
-                                + "; spec rows with it go to " + nfs.get(prev).id);
-                    }
+                int prev = keys.add(l.text(), idx);
+                if (prev >= 0) {
+                    notes.add("spec key \"" + l.text() + "\" is a label of both " + nfs.get(prev).id + " and " + f.id()
+                            + "; spec rows with it go to " + nfs.get(prev).id);
                 }
             }
         }
         byDim.values().removeIf(v -> v < 0);
         this.numberFacets = nfs.toArray(new NumberFacet[0]);
-        this.specKeyFacet = Collections.unmodifiableMap(keys);
+        this.specKeyFacet = keys;
         this.dimensionFacet = Collections.unmodifiableMap(byDim);
         this.trie = tb.build();
         this.labelsCompiled = compiled;
@@ -322,8 +318,8 @@ public final class Labeler {
                     valueState(f.text());
                     segmenter.analyze(fi, SegmentPart.SPEC_KEY, f.key(), this);
                     segmenter.analyze(fi, SegmentPart.SPEC_VALUE, f.text(), this);
-                    Integer nf = numberFacets.length == 0 ? null : specKeyFacet.get(SpecKeyForms.normalise(f.key()));
-                    if (nf != null) {
+                    int nf = numberFacets.length == 0 ? -1 : specKeyFacet.facetOf(f.key());
+                    if (nf >= 0) {
                         numbers.spec(nf, fi, f);
                     } else {
                         numbers.text(fi, f, SegmentPart.SPEC_VALUE, f.text(), false);

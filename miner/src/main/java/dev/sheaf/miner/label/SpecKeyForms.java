@@ -2,44 +2,10 @@ package dev.sheaf.miner.label;
 
 import dev.sheaf.miner.text.Units;
 import java.text.Normalizer;
-import java.util.Locale;
 
-/**
- * The key form a spec row and a number facet's label are compared in, and the unit a key may name
- * ("Weight (kg)").
- *
- * <p>Stand-in until {@code dev.sheaf.miner.mine.SpecKeys} (owned by the quantities helper) is merged
- * into this branch: the rule set is the documented part of it that matters for matching one key
- * against one label — NFKC, lower case with {@link Locale#ROOT}, a trailing colon and a bracketed or
- * comma-separated unit suffix dropped, underscores and hyphens as spaces, dots dropped, spaces
- * collapsed. Both sides go through the same function, so swapping in {@code SpecKeys.normalise} is a
- * one-line change (see {@link #normalise}).
- */
+/** The unit a spec key names at its end ("Weight (kg)", "Capacity [L]", "Weight, g"), for plain-number values. */
 final class SpecKeyForms {
     private SpecKeyForms() {
-    }
-
-    /** The canonical comparison form of a spec key or facet label; may be empty. */
-    static String normalise(String rawKey) {
-        String s = stripUnitSuffix(Normalizer.normalize(rawKey, Normalizer.Form.NFKC).toLowerCase(Locale.ROOT).strip());
-        StringBuilder b = new StringBuilder(s.length());
-        boolean space = false;
-        for (int i = 0; i < s.length(); i++) {
-            char c = s.charAt(i);
-            if (c == '.' || c == ':') {
-                continue;
-            }
-            if (c == '_' || c == '-' || Character.isWhitespace(c)) {
-                space = b.length() > 0;
-                continue;
-            }
-            if (space) {
-                b.append(' ');
-                space = false;
-            }
-            b.append(c);
-        }
-        return b.toString();
     }
 
     /** The unit named at the end of a key ("Weight (kg)", "Capacity [L]", "Weight, g"), or null. */
@@ -50,11 +16,6 @@ final class SpecKeyForms {
             return null;
         }
         return unitOf(s, cut);
-    }
-
-    private static String stripUnitSuffix(String s) {
-        int cut = suffixStart(s);
-        return cut > 0 ? s.substring(0, cut).strip() : stripColon(s);
     }
 
     /** Where a unit suffix starts, or -1 when the key ends in none. */

@@ -235,6 +235,15 @@ class LabelerTest {
     }
 
     @Test
+    void specKeysThatClusterWithAFacetLabelGoToThatFacet() {
+        for (String key : List.of("Wt.", "Weights", "Mass", "Net weight", "WEIGHT (kg)")) {
+            assertEquals(1.2, only(listing("FH-6", "tents", Field.spec(key, "1.2 kg")), "weight").value(), key);
+        }
+        // a modifier that makes another facet keeps the key apart
+        assertTrue(labeler.label(listing("FH-6", "tents", Field.spec("Trail weight", "1.2 kg"))).assignments().isEmpty());
+    }
+
+    @Test
     void quantitiesInTextGoToANamedFacetOrTheOnlyFacetOfTheirDimension() {
         Assignment w = only(text("tents", "Weighs 1.2 kg all in"), "weight");
         assertEquals(1.2, w.value());
