@@ -200,14 +200,14 @@ final class CoverageCommand implements Callable<Integer> {
         }
         if (!r.curve().isEmpty()) {
             out.println();
-            StringBuilder b = new StringBuilder("Coverage curve (greedy by marginal gain): ");
+            StringBuilder b = new StringBuilder("Coverage curve (concepts added greedily by marginal gain): ");
             double[] marks = {0.5, 0.8, 0.9};
             for (double m : marks) {
                 CoverageCurvePoint hit = r.curve().stream().filter(p -> p.share() >= m).findFirst().orElse(null);
-                b.append(pct(m)).append(" of listings with ").append(hit == null ? "never" : hit.rank() + " concepts").append("; ");
+                b.append(pct(m)).append(hit == null ? " not reached" : " with " + hit.rank()).append("; ");
             }
             CoverageCurvePoint last = r.curve().get(r.curve().size() - 1);
-            b.append("all ").append(last.rank()).append(" reach ").append(pct(last.share()));
+            b.append(last.rank()).append(" concepts cover ").append(pct(last.share())).append(" of listings");
             out.println(b);
         }
         if (!r.gapTerms().isEmpty()) {
