@@ -21,7 +21,7 @@ final class BadFiles {
 
     static final List<Bad> EXPECTED = List.of(
             new Bad("bad/empty.html", "empty", "zero bytes"),
-            new Bad("bad/truncated.pdf", "corrupt", "a real spec sheet cut off after 40% of its bytes (no xref, no %%EOF)"),
+            new Bad("bad/truncated.pdf", "corrupt", "a real spec sheet cut off after 40% of its bytes: no xref, no %%EOF, the page content cut mid-stream (lenient parsers open it and find no text)"),
             new Bad("bad/junk.html", "corrupt", "2 KiB of binary noise with NUL bytes behind an .html name"),
             new Bad("bad/latin1.txt", "encoding", "a supplier note in ISO-8859-1 with accented letters (invalid as UTF-8)"),
             new Bad("bad/broken-quote.csv", "parse", "a catalog export whose second record opens a quote that never closes"),

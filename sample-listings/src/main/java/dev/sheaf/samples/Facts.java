@@ -38,6 +38,21 @@ final class Facts {
         return values;
     }
 
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof Facts && ((Facts) o).values.equals(values);
+    }
+
+    @Override
+    public int hashCode() {
+        return values.hashCode();
+    }
+
+    @Override
+    public String toString() {
+        return "Facts" + values;
+    }
+
     /** A builder holding a copy of these facts, to derive a variant. */
     Builder toBuilder() {
         Builder b = new Builder();

@@ -106,14 +106,24 @@ final class Lexicon {
             new Colour("purple", "Plum", "Plum"),
             new Colour("white", "Chalk", "Chalk"));
 
-    /** A product-line name such as "Larchmere" (heads × tails = 1,250 names). */
+    /** Linking syllables that lengthen some names ("Brack" + "en" + "mere"). */
+    static final List<String> INFIXES = List.of("en", "ing", "ow", "ar", "il", "an", "el", "or", "ock", "ith", "un", "ay");
+
+    /** A product-line name such as "Larchmere" or "Brackenfell" (50 × 25 plain, × 12 more with an infix: 16,250 names). */
     static String lineName(Rng r) {
-        return r.pickSkewed(LINE_HEADS, 2) + r.pickSkewed(LINE_TAILS, 1.5);
+        String head = r.pickSkewed(LINE_HEADS, 2);
+        String infix = r.chance(0.3) ? r.pickSkewed(INFIXES, 1.5) : "";
+        return head + infix + r.pickSkewed(LINE_TAILS, 1.5);
     }
 
-    /** An invented place such as "Skarnhope Ridge" (40 × 20 × 20 = 16,000 names; skewed, so a long tail). */
+    /**
+     * An invented place such as "Skarnhope Ridge" or "Blaeowgill Col" (40 × 20 plain, × 12 more with an infix,
+     * × 20 kinds: over 200,000 names; skewed, so a long tail of words seen once).
+     */
     static String place(Rng r) {
-        return r.pickSkewed(PLACE_HEADS, 2) + r.pickSkewed(PLACE_TAILS, 2) + " " + r.pickSkewed(PLACE_KINDS, 1.5);
+        String head = r.pickSkewed(PLACE_HEADS, 2);
+        String infix = r.chance(0.5) ? r.pick(INFIXES) : "";
+        return head + infix + r.pickSkewed(PLACE_TAILS, 2) + " " + r.pickSkewed(PLACE_KINDS, 1.5);
     }
 
     static String capitalise(String s) {

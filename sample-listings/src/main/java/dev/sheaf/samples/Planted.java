@@ -48,9 +48,8 @@ final class Planted {
                 return false;
             }
             int end = i + lowerForm.length();
-            boolean startOk = i == 0 || !Character.isLetterOrDigit(lowerText.charAt(i - 1)) || !Character.isLetterOrDigit(lowerForm.charAt(0));
-            boolean endOk = end == lowerText.length() || !Character.isLetterOrDigit(lowerText.charAt(end))
-                    || !Character.isLetterOrDigit(lowerForm.charAt(lowerForm.length() - 1));
+            boolean startOk = i == 0 || !Character.isLetterOrDigit(lowerText.charAt(i - 1));
+            boolean endOk = end == lowerText.length() || !Character.isLetterOrDigit(lowerText.charAt(end));
             if (startOk && endOk) {
                 return true;
             }

@@ -40,10 +40,14 @@ final class ScaleCorpus {
      * so the bytes do not depend on the number of threads.
      */
     static long jsonl(long n, long seed, Path out, Progress progress) throws IOException {
+        return jsonl(n, seed, out, progress, threads());
+    }
+
+    static long jsonl(long n, long seed, Path out, Progress progress, int threads) throws IOException {
         ProductFactory factory = new ProductFactory(seed);
         long[] bytes = {0};
         Output.write(out, os -> {
-            runBatches(n, (from, to) -> {
+            runBatches(n, threads, (from, to) -> {
                 java.io.ByteArrayOutputStream buf = new java.io.ByteArrayOutputStream((int) (to - from + 1) * 480);
                 try (Feeds.JsonlWriter w = new Feeds.JsonlWriter(buf)) {
                     for (long i = from; i <= to; i++) {
@@ -72,8 +76,7 @@ final class ScaleCorpus {
         long accept(long to, byte[] chunk) throws IOException;
     }
 
-    private static void runBatches(long n, BatchWork work, BatchSink sink) throws IOException {
-        int threads = threads();
+    private static void runBatches(long n, int threads, BatchWork work, BatchSink sink) throws IOException {
         java.util.concurrent.ExecutorService pool = java.util.concurrent.Executors.newFixedThreadPool(threads, r -> {
             Thread t = new Thread(r, "sheaf-generate");
             t.setDaemon(true);
@@ -128,7 +131,7 @@ final class ScaleCorpus {
     static long folder(long n, long seed, Path dir, Progress progress) throws IOException {
         ProductFactory factory = new ProductFactory(seed);
         long[] bytes = {0};
-        runBatches(n, (from, to) -> {
+        runBatches(n, threads(), (from, to) -> {
             long written = 0;
             for (long i = from; i <= to; i++) {
                 written += writeFile(factory, seed, i, dir);

@@ -128,7 +128,7 @@ final class VocabularySource {
         c("three-season", "three-season", "3-season", "three season", "3 season", "3-SSN");
         c("four-season", "four-season", "4-season", "four season", "4 season", "4-SSN", "winter");
         facet("temperature-rating", "Temperature rating", false, List.of("sleeping-bags"), "number", "°C",
-                List.of(b("5-c-plus", "5 °C and warmer", 5.0, null), b("minus-4-to-4-c", "−4 to 4 °C", -4.0, 5.0), b("minus-9-to-minus-5-c", "−9 to −5 °C", -9.0, -4.0), b("minus-10-c-and-below", "−10 °C and colder", null, -9.0)),
+                List.of(b("minus-10-c-and-below", "−10 °C and colder", null, -9.0), b("minus-9-to-minus-5-c", "−9 to −5 °C", -9.0, -4.0), b("minus-4-to-4-c", "−4 to 4 °C", -4.0, 5.0), b("5-c-plus", "5 °C and warmer", 5.0, null)),
                 false, "Comfort rating; written in °C, °F or both, with '-' or the Unicode minus sign.");
         facet("r-value", "R-value", false, List.of("sleeping-pads"), "number", "m²·K/W",
                 List.of(b("r-under-2", "under 2", null, 2.0), b("r-2-to-3.9", "2–3.9", 2.0, 4.0), b("r-4-to-5.4", "4–5.4", 4.0, 5.5), b("r-5.5-plus", "5.5 and up", 5.5, null)),
