@@ -126,9 +126,9 @@ class MineCommandTest {
     }
 
     @Test
-    void withoutTheIngestStageTheCommandSaysItIsNotAvailable() {
+    void theDefaultFeedReadsListingFilesThroughIngest() {
         MineCommand.feed = ListingFeeds.DEFAULT;
-        assertEquals(ExitCodes.NOT_AVAILABLE, run("mine", FEED.toString(), "--out", tmp.toString()));
-        assertTrue(err.toString().contains("needs the ingest stage"), err.toString());
+        assertEquals(ExitCodes.OK, run("mine", FEED.toString(), "--out", tmp.toString()), err.toString());
+        assertTrue(java.nio.file.Files.exists(tmp.resolve("harvest.json")));
     }
 }
