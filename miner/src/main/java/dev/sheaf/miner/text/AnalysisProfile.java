@@ -38,8 +38,8 @@ import org.apache.lucene.analysis.en.EnglishAnalyzer;
  *   <li>{@code possessives} — {@code true}: {@code men's} becomes {@code men}.</li>
  *   <li>{@code stopWords} — {@link #TRADE_STOP_WORDS}, Lucene's English list reviewed for this trade:
  *       "no" and "not" moved to the negation words, function words common in product copy added,
- *       and words that are attributes in outdoor gear ("down", "up", "off", "over", "out", "all",
- *       "on" …) never stopped. {@code "lucene"} selects Lucene's list unchanged, {@code "none"}
+ *       and words that are attributes in outdoor gear ("down", "up", "off", "over", "out", "all" …)
+ *       never stopped. {@code "lucene"} selects Lucene's list unchanged, {@code "none"}
  *       none. {@code addStopWords} and {@code keepWords} adjust the chosen list.</li>
  *   <li>{@code negationWords} — {@link #NEGATION_WORDS}: kept in the Lucene token stream with type
  *       {@link Analysis#TYPE_NEGATION} even when the stop list holds them, so labeling and feedback can
@@ -89,14 +89,15 @@ public final class AnalysisProfile {
     /**
      * Lucene's English stop words ({@link EnglishAnalyzer#ENGLISH_STOP_WORDS_SET}) minus "no" and
      * "not" (negations, kept apart), plus function words common in product copy. Deliberately absent:
-     * down, up, off, over, out, on, all, under, through, around, about, more, less, most, very, too,
-     * only, extra, free, non — attributes or hedges here ("800-fill down", "slip-on", "all-season",
-     * "non-slip", "PFC-free", "more breathable").
+     * down, up, off, over, out, all, under, through, around, about, more, less, most, very, too,
+     * only, extra, free, non — attributes or hedges here ("800-fill down", "zip-off", "all-season",
+     * "non-slip", "PFC-free", "more breathable"). "on" stays stopped: in product copy it is nearly
+     * always the preposition ("on the trail"), and "slip-on" is rare enough to be missed.
      */
     public static final SortedSet<String> TRADE_STOP_WORDS = Collections.unmodifiableSortedSet(new TreeSet<>(List.of(
             // Lucene's list, less "no" and "not"
             "a", "an", "and", "are", "as", "at", "be", "but", "by", "for", "if", "in", "into", "is", "it",
-            "of", "or", "such", "that", "the", "their", "then", "there", "these", "they", "this", "to",
+            "of", "on", "or", "such", "that", "the", "their", "then", "there", "these", "they", "this", "to",
             "was", "will", "with",
             // function words of product copy
             "from", "your", "yours", "you", "you're", "you'll", "you've", "our", "ours", "we", "we're",

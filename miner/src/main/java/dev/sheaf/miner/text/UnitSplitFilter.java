@@ -84,6 +84,9 @@ final class UnitSplitFilter extends TokenFilter {
      * {@code .} or {@code ,} between digits; 0 when the token does not start with a digit.
      */
     static int numberPrefix(char[] b, int len) {
+        if (len == 0 || b[0] < '0' || b[0] > '9') {
+            return 0;
+        }
         int i = 0;
         while (i < len) {
             char c = b[i];
