@@ -1,0 +1,36 @@
+package dev.sheaf.miner.ingest;
+
+import java.io.IOException;
+
+/**
+ * One listing per plain-text or Markdown file. Title: the first {@code #} heading (Markdown) or
+ * the first non-empty line; "Key: value" lines are specs, {@code - x} / {@code * x} lines bullets,
+ * other Markdown headings headings, the rest paragraphs of text (see {@link SpecLines}).
+ */
+final class TextReader implements ListingReader {
+    @Override
+    public String name() {
+        return "text";
+    }
+
+    @Override
+    public void read(SourceFile file) throws IOException {
+        String text = file.readText(null);
+        if (text == null) {
+            return;
+        }
+        boolean markdown = file.extension().equals("md") || file.extension().equals("markdown");
+        emit(file, text, markdown, "");
+    }
+
+    /** Shared with the document reader: text → one listing, or an "empty" problem. */
+    static void emit(SourceFile file, String text, boolean markdown, String locator) {
+        SpecLines.Parsed p = SpecLines.parse(text, markdown);
+        if (p.fields().isEmpty()) {
+            file.problem("", "empty", "no text found in the file; expected a title line and some product text");
+            return;
+        }
+        file.emit(new Listing(p.id() == null ? file.stem() : p.id(), p.category() == null ? "" : p.category(),
+                file.display(), locator, p.fields()));
+    }
+}

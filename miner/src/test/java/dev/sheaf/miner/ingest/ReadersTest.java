@@ -1,0 +1,245 @@
+package dev.sheaf.miner.ingest;
+
+import static dev.sheaf.miner.ingest.Fixtures.fixture;
+import static dev.sheaf.miner.ingest.Fixtures.read;
+import static dev.sheaf.miner.ingest.Fixtures.spec;
+import static dev.sheaf.miner.ingest.Fixtures.specKeys;
+import static dev.sheaf.miner.ingest.Fixtures.texts;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.stream.Stream;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
+
+/** What each reader makes of its fixture: fields, spec keys and values, ids, categories, positions. */
+class ReadersTest {
+
+    @ParameterizedTest
+    @ValueSource(strings = {"html", "csv", "tsv", "json", "jsonl", "text", "markdown", "rtf", "encoding"})
+    void everyFixtureFolderHoldsFiles(String folder) throws IOException {
+        try (Stream<Path> s = Files.list(fixture(folder))) {
+            assertTrue(s.anyMatch(p -> Files.isRegularFile(p)), "fixture folder ingest/" + folder + " is empty");
+        }
+    }
+
+    @Test
+    void htmlPageGivesTitleIdCategoryBulletsAndSpecsFromEveryTableShape() {
+        Listing l = read(fixture("html/ridgeline-2p-tent.html")).only();
+        assertEquals("FH-T-0042", l.id());
+        assertEquals("Tents", l.category(), "category from the breadcrumb's last link");
+        assertEquals("Ridgeline 2P Tent", l.title(), "og:title");
+        assertEquals(List.of("A two-person backpacking tent with two doors and a full-coverage fly."), texts(l, FieldKind.DESCRIPTION));
+        assertEquals(List.of("Features", "Specifications"), texts(l, FieldKind.HEADING), "the h1 used as title is not repeated");
+        assertEquals(List.of("Two doors and two vestibules", "Colour-coded clips for quick pitching"), texts(l, FieldKind.BULLET));
+        assertEquals("30D ripstop nylon", spec(l, "Floor"), "Key: value list item");
+        assertEquals("1.9 kg", spec(l, "Packed weight"), "th/td row");
+        assertEquals("105 cm", spec(l, "Peak height"), "td/td row");
+        assertEquals("Aluminium, 8.7 mm", spec(l, "Poles"), "dt/dd, trailing colon dropped");
+        assertEquals("2 people", spec(l, "Capacity"));
+        assertEquals("3", spec(l, "Seasons"), "Key: value line in a paragraph, split at <br>");
+        assertEquals("20D silicone-coated nylon", spec(l, "Fly fabric"));
+        assertEquals(List.of("Pitch it fast in wind and rain."), texts(l, FieldKind.TEXT));
+        String all = l.fields().toString();
+        assertFalse(all.contains("99 kg"), "script ignored");
+        assertFalse(all.contains("font-family"), "style ignored");
+        assertFalse(all.contains("menu") || all.contains("Sleeping bags"), "nav ignored");
+        assertFalse(all.contains("Returns"), "footer ignored");
+        assertEquals("ridgeline-2p-tent.html", l.source().substring(l.source().lastIndexOf('/') + 1));
+    }
+
+    @Test
+    void htmlHeaderRowOverOneValueRowIsASpecTableAndDataSkuIsTheId() {
+        Listing l = read(fixture("html/sideways-table.html")).only();
+        assertEquals("FH-S-0007", l.id());
+        assertEquals("Emberline Stove", l.title(), "h1 when there is no og:title");
+        assertEquals(List.of("Fuel", "Burn time", "Weight"), specKeys(l));
+        assertEquals("60 min", spec(l, "Burn time"));
+        assertEquals(List.of("Boils a litre in 4 minutes."), texts(l, FieldKind.TEXT));
+        assertEquals("", l.category());
+    }
+
+    @Test
+    void csvRowsMapByDetectedColumnsAndARaggedRowIsAPositionedProblem() {
+        Fixtures.Result r = read(fixture("csv/catalog-export.csv"));
+        assertEquals(List.of("FH-B-001", "FH-B-002", "FH-B-004"), r.ids(), "the ragged row is skipped, later rows still read");
+        Listing l = r.byId("FH-B-001");
+        assertEquals("packs", l.category());
+        assertEquals("row 2", l.locator(), "the header is row 1");
+        assertEquals("Alder 40L Pack", l.title());
+        assertEquals(List.of("A 40-litre pack for long weekends, with a \"floating\" lid."), texts(l, FieldKind.DESCRIPTION));
+        assertEquals(List.of("Padded hip belt", "Rain cover"), texts(l, FieldKind.BULLET));
+        assertEquals(List.of("Weight", "Colour"), specKeys(l), "every unmapped column is a spec");
+        assertEquals("1.4 kg", spec(l, "Weight"));
+        assertEquals(List.of("Mesh back panel"), texts(r.byId("FH-B-002"), FieldKind.BULLET), "empty cells give no field");
+        Problem p = r.problems().get(0);
+        assertEquals(1, r.problems().size(), r.problems().toString());
+        assertEquals("row 4", p.position());
+        assertEquals("parse", p.kind());
+        assertTrue(p.reason().contains("expected 8 cells") && p.reason().contains("found 3"), p.reason());
+    }
+
+    @Test
+    void tsvIsSniffedAndADuplicateHeaderIsRenamedAndReported() {
+        Fixtures.Result r = read(fixture("tsv/stoves.tsv"));
+        assertEquals(List.of("FH-S-010", "FH-S-011"), r.ids());
+        Listing l = r.byId("FH-S-010");
+        assertEquals("Emberline Stove", l.title());
+        assertEquals("85 g", spec(l, "Weight"));
+        assertEquals("3 oz", spec(l, "Weight (2)"));
+        assertEquals(1, r.problems().size());
+        assertEquals("row 1", r.problems().get(0).position());
+        assertTrue(r.problems().get(0).reason().contains("'Weight' twice"), r.problems().get(0).reason());
+    }
+
+    @Test
+    void csvWithAnUnbalancedQuoteKeepsEveryOtherRow(@TempDir Path dir) throws IOException {
+        Path f = dir.resolve("broken.csv");
+        Files.writeString(f, "id,title,Weight\nA1,First,1 kg\nA2,\"Second,2 kg\nA3,Third,3 kg\nA4,Fourth,4 kg\n",
+                java.nio.charset.StandardCharsets.UTF_8);
+        Fixtures.Result r = read(f);
+        assertEquals(List.of("A1", "A3", "A4"), r.ids(), r.problems().toString());
+        assertEquals("row 3", r.problems().get(0).position());
+        assertEquals("parse", r.problems().get(0).kind());
+        assertEquals("row 4", r.byId("A3").locator());
+    }
+
+    @Test
+    void csvSemicolonDelimiterAndAGivenMappingWithSpecPairsInACell(@TempDir Path dir) throws IOException {
+        Path f = dir.resolve("export.csv");
+        Files.writeString(f, "Art;Bez;Eigenschaften;Preis\nX1;Fell Gaiters;Height: 38 cm | Closure: hook;39\n",
+                java.nio.charset.StandardCharsets.UTF_8);
+        ColumnMapping m = new ColumnMapping("Art", "Bez", null, null, List.of(), List.of("Eigenschaften"), List.of());
+        Listing l = read(Ingest.builder().source(SourceSpec.of(f).withMapping(m))).only();
+        assertEquals("X1", l.id());
+        assertEquals("Fell Gaiters", l.title());
+        assertEquals(List.of("Height", "Closure"), specKeys(l), "only the listed spec column; Preis is not mapped");
+        assertEquals("hook", spec(l, "Closure"));
+    }
+
+    @Test
+    void jsonObjectWithAProductsArrayReadsSpecPairsAndSpecObjects() {
+        Fixtures.Result r = read(fixture("json/products.json"));
+        assertEquals(List.of("FH-J-100", "FH-J-101"), r.ids());
+        Listing a = r.byId("FH-J-100");
+        assertEquals("jackets", a.category(), "the most specific element of a category path");
+        assertEquals("Skerry Rain Jacket", a.title());
+        assertEquals(List.of("Pit zips", "Helmet-compatible hood"), texts(a, FieldKind.BULLET));
+        assertEquals("310 g", spec(a, "Weight"));
+        assertEquals("fully taped", spec(a, "Seam sealing"));
+        assertEquals("line 4", a.locator());
+        Listing b = r.byId("FH-J-101");
+        assertEquals("800-fill down", spec(b, "Fill"));
+        assertEquals("365", spec(b, "Weight"), "numbers become their text");
+        assertTrue(r.problems().isEmpty(), r.problems().toString());
+    }
+
+    @Test
+    void jsonLinesSkipABrokenLineAndReadTheRest() {
+        Fixtures.Result r = read(fixture("jsonl/feed.jsonl"));
+        assertEquals(List.of("FH-000001", "FH-000002", "FH-000004"), r.ids());
+        assertEquals(1, r.problems().size());
+        assertEquals("line 3", r.problems().get(0).position());
+        assertEquals("parse", r.problems().get(0).kind());
+        Listing l = r.byId("FH-000002");
+        assertEquals("line 2", l.locator());
+        assertEquals("-5 °C", spec(l, "Comfort"));
+        assertEquals("isobutane", spec(r.byId("FH-000004"), "Fuel"), "specs as [{key, value}]");
+    }
+
+    @Test
+    void jsonMappingReachesNestedMembersByDottedPath(@TempDir Path dir) throws IOException {
+        Path f = dir.resolve("nested.jsonl");
+        Files.writeString(f, "{\"ref\":{\"code\":\"N1\"},\"label\":\"Moor Hat\",\"attributes\":{\"weight\":\"80 g\",\"brim\":\"wide\"}}\n",
+                java.nio.charset.StandardCharsets.UTF_8);
+        ColumnMapping m = new ColumnMapping("ref.code", "label", null, null, List.of(), List.of("attributes.weight"), List.of());
+        Listing l = read(Ingest.builder().source(SourceSpec.of(f).withMapping(m))).only();
+        assertEquals("N1", l.id());
+        assertEquals(List.of("weight"), specKeys(l));
+        assertEquals("80 g", spec(l, "weight"));
+    }
+
+    @Test
+    void plainTextGivesTitleSpecsBulletsAndIdFromSkuLine() {
+        Listing l = read(fixture("text/trail-mug.txt")).only();
+        assertEquals("FH-M-020", l.id());
+        assertEquals("cookware", l.category());
+        assertEquals("Cairn Titanium Mug", l.title());
+        assertEquals(List.of("Capacity", "Weight"), specKeys(l));
+        assertEquals("68 g", spec(l, "Weight"));
+        assertEquals(List.of("Laser-etched volume marks", "Fits a 100 g canister"), texts(l, FieldKind.BULLET));
+        assertEquals(List.of("A 450 ml mug that nests over a small gas canister. Folding handles stay cool."), texts(l, FieldKind.TEXT));
+    }
+
+    @Test
+    void markdownTitleIsTheFirstHashHeadingAndEmphasisIsDropped() {
+        Listing l = read(fixture("markdown/daypack.md")).only();
+        assertEquals("daypack", l.id(), "no SKU line: the file name");
+        assertEquals("Lark 18L Daypack", l.title());
+        assertEquals(List.of("Details"), texts(l, FieldKind.HEADING));
+        assertEquals("18 L", spec(l, "Volume"));
+        assertEquals("one size", spec(l, "Back length"));
+        assertEquals(List.of("Stretch side pockets", "Hydration sleeve"), texts(l, FieldKind.BULLET));
+    }
+
+    @Test
+    void rtfIsReadThroughTikaWithItsCodePage() {
+        Listing l = read(fixture("rtf/wool-socks.rtf")).only();
+        assertEquals("Wool Hiking Socks", l.title());
+        assertEquals("merino wool", spec(l, "Material"));
+        assertEquals("M", spec(l, "Größe"));
+    }
+
+    @Test
+    void pdfTextBecomesTitleAndSpecs(@TempDir Path dir) throws IOException {
+        Path f = Fixtures.write(dir, "lantern.pdf", Fixtures.pdf(List.of("Glimmer Camp Lantern", "SKU: FH-L-003",
+                "Brightness: 300 lumens", "Run time: 12 h", "A warm light for the tent."), null));
+        Listing l = read(f).only();
+        assertEquals("FH-L-003", l.id());
+        assertEquals("Glimmer Camp Lantern", l.title());
+        assertEquals("300 lumens", spec(l, "Brightness"));
+        assertEquals("12 h", spec(l, "Run time"));
+    }
+
+    @Test
+    void docxParagraphsAndTableRowsBecomeTitleAndSpecs(@TempDir Path dir) throws IOException {
+        Path f = Fixtures.write(dir, "sheet.docx", Fixtures.docx("Scree Trekking Poles",
+                List.of("Adjustable poles for steep ground.", "Locking: lever"), List.of(new String[] {"Weight", "480 g"},
+                        new String[] {"Length", "65-135 cm"})));
+        Listing l = read(f).only();
+        assertEquals("Scree Trekking Poles", l.title());
+        assertEquals("lever", spec(l, "Locking"));
+        assertEquals("480 g", spec(l, "Weight"), "a two-cell table row is a spec");
+        assertEquals("65-135 cm", spec(l, "Length"));
+    }
+
+    @ParameterizedTest
+    @ValueSource(strings = {"utf8.txt", "utf8-bom.txt", "utf16le-bom.txt", "windows-1252.txt"})
+    void everyEncodingOfTheSameTextReadsTheSame(String name) {
+        Fixtures.Result r = read(fixture("encoding/" + name));
+        Listing l = r.only();
+        assertEquals("Lövberg Ängsmark Parka", l.title());
+        assertTrue(spec(l, "Material").startsWith("Baumwolle, Größe: L"), spec(l, "Material"));
+        assertEquals(List.of("Warm für Außeneinsätze"), texts(l, FieldKind.BULLET));
+        assertTrue(r.problems().isEmpty(), r.problems().toString());
+        if (name.equals("windows-1252.txt")) {
+            assertEquals("Baumwolle, Größe: L – €", spec(l, "Material"), "windows-1252 punctuation and euro sign");
+        }
+    }
+
+    @Test
+    void latin1CsvReadsAsLatin1() {
+        Fixtures.Result r = read(fixture("encoding/latin1.csv"));
+        assertEquals("Größe Parka", r.byId("FH-E-1").title());
+        assertEquals("Baumwolle für Außen", spec(r.byId("FH-E-1"), "Material"));
+        assertEquals("Ängsmark Vest", r.byId("FH-E-2").title());
+        assertTrue(r.problems().isEmpty(), r.problems().toString());
+    }
+}
