@@ -103,7 +103,11 @@ public final class Ingest {
             return this;
         }
 
-        /** Files larger than this are not read ("too-large"); default {@value #DEFAULT_MAX_FILE_BYTES} bytes. */
+        /**
+         * Files read whole (HTML, PDF, DOCX, text) larger than this are not read ("too-large");
+         * streamed feeds (CSV/TSV, JSON, JSON Lines) have no size limit. Default
+         * {@value #DEFAULT_MAX_FILE_BYTES} bytes.
+         */
         public Builder maxFileBytes(long bytes) {
             if (bytes <= 0) {
                 throw new IllegalArgumentException("maxFileBytes must be positive, got " + bytes);
@@ -406,11 +410,13 @@ public final class Ingest {
             file = new SourceFile(path, shown, size, spec.mapping(), c);
             if (size == 0) {
                 file.problem("", "empty", "the file is empty (0 bytes)");
-            } else if (size > maxFileBytes) {
-                file.problem("", "too-large", "the file has " + size + " bytes, more than the limit of " + maxFileBytes
-                        + "; raise the limit (maxFileBytes) or split the file");
             } else {
                 ListingReader reader = Readers.forFile(file);
+                if (size > maxFileBytes && !reader.streams()) {
+                    file.problem("", "too-large", "the file has " + size + " bytes, more than the limit of " + maxFileBytes
+                            + " for a " + reader.name() + " file, which is read whole; raise the limit or split the file");
+                    return;
+                }
                 try {
                     reader.read(file);
                 } catch (StackOverflowError e) {

@@ -33,6 +33,11 @@ final class JsonReader implements ListingReader {
     private static final ObjectReader TREE = MAPPER.reader();
 
     @Override
+    public boolean streams() {
+        return true;
+    }
+
+    @Override
     public String name() {
         return "JSON";
     }

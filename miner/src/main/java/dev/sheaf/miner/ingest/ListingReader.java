@@ -12,4 +12,12 @@ interface ListingReader {
     String name();
 
     void read(SourceFile file) throws IOException;
+
+    /**
+     * Whether this reader streams its file record by record without holding it in memory; the
+     * per-file size limit then does not apply, so a feed of a million listings is read whole.
+     */
+    default boolean streams() {
+        return false;
+    }
 }

@@ -29,6 +29,11 @@ final class TableReader implements ListingReader {
     private static final int MAX_RESTARTS = 100;
 
     @Override
+    public boolean streams() {
+        return true;
+    }
+
+    @Override
     public String name() {
         return "CSV/TSV";
     }
