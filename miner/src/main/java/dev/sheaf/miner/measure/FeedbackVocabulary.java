@@ -155,8 +155,24 @@ public final class FeedbackVocabulary {
         return out;
     }
 
+    /** Normal forms already computed; bounded, since feedback repeats a few thousand forms at most. */
+    private static final java.util.concurrent.ConcurrentHashMap<String, String> NORMAL = new java.util.concurrent.ConcurrentHashMap<>();
+    private static final int NORMAL_CACHE = 100_000;
+
     /** The normal form of a label or a piece of text: its words, lower-cased, folded, joined by one space. */
     public static String normalise(String text) {
+        String cached = NORMAL.get(text);
+        if (cached != null) {
+            return cached;
+        }
+        String n = tokenised(text);
+        if (NORMAL.size() < NORMAL_CACHE) {
+            NORMAL.put(text, n);
+        }
+        return n;
+    }
+
+    private static String tokenised(String text) {
         CueTokens t = CueTokens.of(text);
         StringBuilder b = new StringBuilder();
         for (int i = 0; i < t.size(); i++) {
