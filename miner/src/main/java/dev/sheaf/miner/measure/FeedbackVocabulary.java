@@ -12,6 +12,9 @@ import java.util.Set;
 import java.util.SortedMap;
 import java.util.TreeMap;
 import java.util.TreeSet;
+import dev.sheaf.vocab.Concept;
+import dev.sheaf.vocab.ConceptLabel;
+import dev.sheaf.vocab.Vocabulary;
 import org.apache.lucene.analysis.miscellaneous.ASCIIFoldingFilter;
 
 /**
@@ -68,6 +71,31 @@ public final class FeedbackVocabulary {
             }
         }
         return new FeedbackVocabulary(m);
+    }
+
+    /**
+     * The consistency view of a vocabulary: every live concept and facet with all its labels
+     * (preferred, alternative and hidden, every language), its first facet, its broader ids, and
+     * whether a facet above it is a regulated claim. Labels show in the vocabulary's default language.
+     */
+    public static FeedbackVocabulary from(Vocabulary v) {
+        Objects.requireNonNull(v, "vocabulary");
+        List<FeedbackConcept> out = new ArrayList<>();
+        for (Concept c : v.allConcepts()) {
+            List<String> labels = new ArrayList<>();
+            for (ConceptLabel l : c.labels()) {
+                if (!labels.contains(l.text())) {
+                    labels.add(l.text());
+                }
+            }
+            boolean claim = false;
+            for (Concept f : v.facetsOf(c.id())) {
+                claim |= f.facet().regulatedClaim();
+            }
+            out.add(new FeedbackConcept(c.id(), c.displayLabel(v.defaultLanguage()),
+                    v.facetOf(c.id()).map(Concept::id).orElse(null), c.isFacet(), labels, claim, List.copyOf(c.broader())));
+        }
+        return of(out);
     }
 
     /** An empty vocabulary (no labels, nothing shared). */
