@@ -175,7 +175,7 @@ public final class ConsistencyFiles {
             csv.row("row", "pair_id", "reference_id", "target_id", "annotator", "attribute", "concept", "also_concepts",
                     "surface", "start", "end", "via", "label", "read", "direction", "comparative", "hedged", "negated",
                     "excessive", "scale_facet", "grounding", "grounding_kind", "target_value", "reference_value", "contrast",
-                    "grounding_reason");
+                    "grounding_reason", "unchecked_cause");
             for (FeedbackMention m : report.mentions()) {
                 GroundingCheck g = m.grounding();
                 csv.row(m.row(), m.pairId(), m.referenceId(), m.targetId(), m.annotator(), m.attribute(),
@@ -184,7 +184,7 @@ public final class ConsistencyFiles {
                         m.directionWord(), m.comparative(), m.hedged(), m.negated(), m.excessive(),
                         m.scaleFacet() == null ? "" : m.scaleFacet(), g.outcome().word(), g.kind(),
                         g.targetValue() == null ? "" : g.targetValue(), g.referenceValue() == null ? "" : g.referenceValue(),
-                        g.contrast() == null ? "" : g.contrast(), g.reason());
+                        g.contrast() == null ? "" : g.contrast(), g.reason(), g.cause());
             }
             csv.flush();
         });

@@ -54,8 +54,15 @@ public final class FeedbackVocabulary {
         }
         List<SharedLabel> s = new ArrayList<>();
         byLabel.forEach((l, ids) -> {
-            if (ids.size() > 1) {
-                s.add(new SharedLabel(l, List.copyOf(ids)));
+            // A facet named like its own value ("Hood" over "hood") is a dimension and its value, not
+            // two meanings: the facet leaves the group when one of its own values carries the label.
+            List<String> carriers = new ArrayList<>(ids);
+            carriers.removeIf(id -> {
+                FeedbackConcept c = concepts.get(id);
+                return c.isFacet() && ids.stream().anyMatch(o -> !o.equals(id) && id.equals(concepts.get(o).facetId()));
+            });
+            if (carriers.size() > 1) {
+                s.add(new SharedLabel(l, List.copyOf(carriers)));
             }
         });
         this.shared = List.copyOf(s);
@@ -118,7 +125,10 @@ public final class FeedbackVocabulary {
         return c == null ? id : c.label();
     }
 
-    /** Labels (normal form) carried by two or more concepts, in label order. */
+    /**
+     * Labels (normal form) carried by two or more concepts, in label order. A facet that shares a
+     * label with one of its own values ("Hood" over the value "hood") is not counted as a carrier.
+     */
     public List<SharedLabel> sharedLabels() {
         return shared;
     }

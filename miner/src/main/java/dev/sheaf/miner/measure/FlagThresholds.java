@@ -21,8 +21,8 @@ import java.util.Objects;
  * <tr><th>key</th><th>default</th><th>flag</th><th>source</th></tr>
  * <tr><td>alpha.tentative</td><td>.667</td><td>contested when α below</td><td>Krippendorff 2004, Content Analysis 2nd ed. [mem]</td></tr>
  * <tr><td>alpha.reliable, kappa.*</td><td>.800; .20/.40/.60/.80</td><td>shown beside α and κ</td><td>Krippendorff 2004; Landis &amp; Koch 1977, Biometrics 33(1)</td></tr>
- * <tr><td>direction.agreement</td><td>.80</td><td>contested when mean pairwise direction agreement below</td><td>[practice]</td></tr>
- * <tr><td>direction.contradiction</td><td>.20</td><td>contested when the share of pairs with a contradiction is above</td><td>[practice]</td></tr>
+ * <tr><td>direction.agreement</td><td>.50</td><td>contested when mean pairwise direction agreement below</td><td>[practice]</td></tr>
+ * <tr><td>direction.contradiction</td><td>.50</td><td>contested when the share of pairs with a contradiction is above</td><td>[practice]</td></tr>
  * <tr><td>direction.minPairs</td><td>3</td><td>direction figures judged only with at least this many pairs of two or more mentioners</td><td>[practice]</td></tr>
  * <tr><td>mentions.min</td><td>5</td><td>hedge, comparative and grounding figures judged only with at least this many mentions</td><td>[practice]</td></tr>
  * <tr><td>hedge.rate</td><td>.30</td><td>vague when the share of hedged mentions is above</td><td>[practice]</td></tr>
@@ -65,7 +65,7 @@ public record FlagThresholds(AgreementThresholds agreement, double directionAgre
     /** Where each default comes from, by key; shown in reports beside the edge. */
     public static final Map<String, String> SOURCES = sources();
 
-    public static final FlagThresholds DEFAULTS = new FlagThresholds(AgreementThresholds.DEFAULTS, 0.80, 0.20, 3, 5,
+    public static final FlagThresholds DEFAULTS = new FlagThresholds(AgreementThresholds.DEFAULTS, 0.50, 0.50, 3, 5,
             0.30, 0.80, 0.70, 0.50, 0.50, 0.80, 0.0, 5);
 
     public FlagThresholds {
@@ -103,10 +103,11 @@ public record FlagThresholds(AgreementThresholds agreement, double directionAgre
         for (String k : List.of("kappa.slight", "kappa.fair", "kappa.moderate", "kappa.substantial")) {
             m.put(k, lk + ": strength-of-agreement bands, shown beside every kappa");
         }
-        m.put("direction.agreement", "[practice] raw agreement is not chance-corrected; with two directions in play "
-                + "chance alone gives .50, and below .80 one pair of mentioners in five disagrees");
-        m.put("direction.contradiction", "[practice] when more than one pair in five holds a more-vs-less or "
-                + "present-vs-absent clash, people are not describing the same thing");
+        m.put("direction.agreement", "[practice] shoppers are not trained annotators and each errs on their own: two who are "
+                + "right 85% of the time agree on a clear attribute only .85² + .15² = .745 of the time, so raw agreement "
+                + "flags only when mentioners disagree more often than they agree");
+        m.put("direction.contradiction", "[practice] flagged when at least half the pairs hold a more-vs-less or "
+                + "present-vs-absent clash; below that, individual errors explain the clashes");
         m.put("direction.minPairs", "[practice] fewer pairs cannot tell a pattern from chance");
         m.put("mentions.min", "[practice] below five mentions a share moves by 20 points with one sentence");
         m.put("hedge.rate", "[practice] when nearly a third of uses are softened (a bit, kind of, I think), people are "

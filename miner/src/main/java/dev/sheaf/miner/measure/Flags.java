@@ -195,7 +195,10 @@ public final class Flags {
             flags.add(new Flag(FlagKind.VAGUE, id, "grounding-checkable", checkable, t.groundingCheckable(), "<",
                     "grounding.checkable", "The catalog can check " + g.checked() + " of " + g.mentions() + " mentions ("
                     + pct(checkable) + "), below " + pct(t.groundingCheckable()) + " " + source("grounding.checkable")
-                    + ". Add a scale or a catalog field that carries it, or drop it.",
+                    + (causes(mentions).isEmpty() ? "" : ". Unchecked: " + causes(mentions))
+                    + ". No scale: map its words to a number facet or drop it; "
+                    + "listings missing: the feedback names listings the assignments do not hold (check the ids); "
+                    + "values missing: the catalog does not state it.",
                     reasons(mentions, m -> !m.grounding().checked(), t.evidenceLimit())));
         } else if (g.checked() >= t.minMentions() && g.precision() < t.groundingPrecision()) {
             flags.add(new Flag(FlagKind.VAGUE, id, "grounding-precision", g.precision(), t.groundingPrecision(), "<",
@@ -307,6 +310,24 @@ public final class Flags {
             }
         }
         return ev;
+    }
+
+    /** "12 no scale, 3 listings missing", in {@link GroundingCheck#CAUSES} order. */
+    private static String causes(List<FeedbackMention> mentions) {
+        Map<String, Integer> n = new java.util.LinkedHashMap<>();
+        GroundingCheck.CAUSES.forEach(c -> n.put(c, 0));
+        mentions.forEach(m -> {
+            if (!m.grounding().checked()) {
+                n.merge(m.grounding().cause(), 1, Integer::sum);
+            }
+        });
+        List<String> out = new ArrayList<>();
+        n.forEach((c, k) -> {
+            if (k > 0) {
+                out.add(k + " " + c.replace('-', ' '));
+            }
+        });
+        return String.join(", ", out);
     }
 
     private static String source(String key) {

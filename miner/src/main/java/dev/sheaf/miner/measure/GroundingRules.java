@@ -25,15 +25,16 @@ final class GroundingRules {
         boolean presence = direction == Direction.PRESENT || direction == Direction.ABSENT;
         String kind = presence ? GroundingCheck.PRESENCE : GroundingCheck.COMPARISON;
         if (!presence && scale == null) {
-            return unchecked(kind, null, "no scale maps '" + attribute + "' to a number facet, so 'more' or 'less' of it "
+            return unchecked(kind, null, "no-scale", "no scale maps '" + attribute + "' to a number facet, so 'more' or 'less' of it "
                     + "cannot be compared with catalog values");
         }
         if (catalog == null) {
-            return unchecked(kind, presence ? null : scale.facet(), "no catalog facts were given (assignments)");
+            return unchecked(kind, presence ? null : scale.facet(), "no-catalog", "no catalog facts were given (assignments)");
         }
         Optional<GroundingListing> target = catalog.listing(targetId);
         if (target.isEmpty()) {
-            return unchecked(kind, presence ? null : scale.facet(), "the catalog does not hold the target listing " + targetId);
+            return unchecked(kind, presence ? null : scale.facet(), "listing-missing",
+                    "the catalog does not hold the target listing " + targetId);
         }
         Optional<GroundingListing> reference = catalog.listing(referenceId);
         if (presence) {
@@ -42,26 +43,26 @@ final class GroundingRules {
         String facet = scale.facet();
         Double t = target.get().number(facet);
         if (t == null) {
-            return unchecked(kind, facet, "the target " + targetId + " has no " + facet + " value");
+            return unchecked(kind, facet, "value-missing", "the target " + targetId + " has no " + facet + " value");
         }
         if (reference.isEmpty()) {
             return new GroundingCheck(GroundingOutcome.UNCHECKED, kind, facet, t, null, null,
-                    "the catalog does not hold the reference listing " + referenceId);
+                    "the catalog does not hold the reference listing " + referenceId, "listing-missing");
         }
         Double r = reference.get().number(facet);
         if (r == null) {
             return new GroundingCheck(GroundingOutcome.UNCHECKED, kind, facet, t, null, null,
-                    "the reference " + referenceId + " has no " + facet + " value");
+                    "the reference " + referenceId + " has no " + facet + " value", "value-missing");
         }
         int cmp = Double.compare(t, r);
         boolean agrees = direction == Direction.MORE ? cmp > 0 : cmp < 0;
         String claim = direction == Direction.MORE ? "more" : "less";
         String values = facet + " " + number(t) + " (target) vs " + number(r) + " (reference)";
         if (agrees) {
-            return new GroundingCheck(GroundingOutcome.GROUNDED, kind, facet, t, r, null, "says " + claim + "; " + values);
+            return new GroundingCheck(GroundingOutcome.GROUNDED, kind, facet, t, r, null, "says " + claim + "; " + values, "");
         }
         return new GroundingCheck(GroundingOutcome.NOT_GROUNDED, kind, facet, t, r, null,
-                "says " + claim + ", but " + values + (cmp == 0 ? " are equal" : ""));
+                "says " + claim + ", but " + values + (cmp == 0 ? " are equal" : ""), "");
     }
 
     private static GroundingCheck presence(String concept, Direction direction, GroundingListing target,
@@ -72,17 +73,17 @@ final class GroundingRules {
                 : "does not mention " + concept;
         if (has != saysPresent) {
             return new GroundingCheck(GroundingOutcome.NOT_GROUNDED, GroundingCheck.PRESENCE, null, null, null, null,
-                    "says " + (saysPresent ? "present" : "absent") + ", but the target " + target.id() + " " + targetState);
+                    "says " + (saysPresent ? "present" : "absent") + ", but the target " + target.id() + " " + targetState, "");
         }
         Boolean contrast = reference == null ? null : reference.carries(concept) != has;
         String ref = reference == null ? "; the reference is not in the catalog"
                 : contrast ? "; the reference differs" : "; the reference is the same";
         return new GroundingCheck(GroundingOutcome.GROUNDED, GroundingCheck.PRESENCE, null, null, null, contrast,
-                "says " + (saysPresent ? "present" : "absent") + "; the target " + target.id() + " " + targetState + ref);
+                "says " + (saysPresent ? "present" : "absent") + "; the target " + target.id() + " " + targetState + ref, "");
     }
 
-    private static GroundingCheck unchecked(String kind, String facet, String reason) {
-        return new GroundingCheck(GroundingOutcome.UNCHECKED, kind, facet, null, null, null, reason);
+    private static GroundingCheck unchecked(String kind, String facet, String cause, String reason) {
+        return new GroundingCheck(GroundingOutcome.UNCHECKED, kind, facet, null, null, null, reason, cause);
     }
 
     private static String number(double v) {

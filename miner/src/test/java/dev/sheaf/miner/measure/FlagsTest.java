@@ -95,22 +95,22 @@ class FlagsTest {
     @Test
     void contestedWhenDirectionAgreementIsBelowItsEdge() {
         FlagReport r = feedback(false,
-                attr("at-edge", ConsistencyAttribute.KIND_CONCEPT, 10, 0, 0, 0, agreement(5, 0.80, 1), null),
-                attr("below", ConsistencyAttribute.KIND_CONCEPT, 10, 0, 0, 0, agreement(5, 0.79, 1), null),
+                attr("at-edge", ConsistencyAttribute.KIND_CONCEPT, 10, 0, 0, 0, agreement(5, 0.50, 1), null),
+                attr("below", ConsistencyAttribute.KIND_CONCEPT, 10, 0, 0, 0, agreement(5, 0.49, 1), null),
                 attr("too-few-pairs", ConsistencyAttribute.KIND_CONCEPT, 10, 0, 0, 0, agreement(2, 0.10, 0), null));
         assertFalse(r.flags("at-edge").isPresent());
         assertFalse(r.flags("too-few-pairs").isPresent(), "fewer than direction.minPairs judged pairs");
         Flag f = only(r, "below", FlagKind.CONTESTED);
         assertEquals("direction-agreement", f.criterion());
-        assertEquals(0.79, f.figure());
+        assertEquals(0.49, f.figure());
     }
 
     @Test
     void contestedWhenTheContradictionShareIsAboveItsEdge() {
-        // 1 of 5 pairs = .20 (at the edge); 2 of 5 = .40
+        // 2 of 4 pairs = .50 (at the edge); 3 of 5 = .60
         FlagReport r = feedback(false,
-                attr("at-edge", ConsistencyAttribute.KIND_CONCEPT, 10, 0, 0, 0, agreement(5, 0.9, 1), null),
-                attr("above", ConsistencyAttribute.KIND_CONCEPT, 10, 0, 0, 0, agreement(5, 0.9, 2), null));
+                attr("at-edge", ConsistencyAttribute.KIND_CONCEPT, 10, 0, 0, 0, agreement(4, 0.9, 2), null),
+                attr("above", ConsistencyAttribute.KIND_CONCEPT, 10, 0, 0, 0, agreement(5, 0.9, 3), null));
         assertFalse(r.flags("at-edge").isPresent());
         assertEquals("contradictions", only(r, "above", FlagKind.CONTESTED).criterion());
     }
@@ -209,6 +209,20 @@ class FlagsTest {
         assertEquals(2, f.figure());
         assertTrue(r.has("down-jacket", FlagKind.AMBIGUOUS));
         assertFalse(r.has("hood", FlagKind.AMBIGUOUS), "hood's labels are its own");
+    }
+
+    @Test
+    void aFacetNamedLikeItsOwnValueIsNoAmbiguityButTwoValuesAre() {
+        FeedbackVocabulary own = FeedbackVocabulary.of(List.of(
+                new FeedbackConcept("hood-facet", "Hood", "hood-facet", true, List.of("Hood"), false),
+                new FeedbackConcept("hood", "hood", "hood-facet", false, List.of("hood"), false)));
+        assertTrue(own.sharedLabels().isEmpty(), own.sharedLabels().toString());
+        FeedbackVocabulary two = FeedbackVocabulary.of(List.of(
+                new FeedbackConcept("hood-facet", "Hood", "hood-facet", true, List.of("Hood"), false),
+                new FeedbackConcept("hood", "hood", "hood-facet", false, List.of("hood"), false),
+                new FeedbackConcept("hood-cover", "hood", "stove-parts", false, List.of("hood"), false)));
+        assertEquals(List.of(new FeedbackVocabulary.SharedLabel("hood", List.of("hood", "hood-cover"))), two.sharedLabels(),
+                "the facet is represented by its own value; the two values in different facets stay");
     }
 
     @Test

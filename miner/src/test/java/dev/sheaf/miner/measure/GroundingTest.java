@@ -120,10 +120,16 @@ class GroundingTest {
         GroundingCheck g = only(noValue, "lighter").grounding();
         assertEquals(GroundingOutcome.UNCHECKED, g.outcome());
         assertTrue(g.reason().contains("reference R2 has no weight"), g.reason());
+        assertEquals("value-missing", g.cause());
         ConsistencyReport noScale = run(List.of(s("P1", "R1", "T1", "a", "Roomier than this one", 2)), CATALOG);
         assertTrue(only(noScale, "roomier").grounding().reason().contains("no scale"));
+        assertEquals("no-scale", only(noScale, "roomier").grounding().cause());
         ConsistencyReport noCatalog = run(List.of(s("P1", "R1", "T1", "a", "It has a hood", 2)), null);
         assertEquals(GroundingOutcome.UNCHECKED, only(noCatalog, "hood").grounding().outcome());
+        assertEquals("no-catalog", only(noCatalog, "hood").grounding().cause());
+        ConsistencyReport unknown = run(List.of(s("P1", "R1", "T9", "a", "It has a hood", 2)), CATALOG);
+        assertEquals("listing-missing", only(unknown, "hood").grounding().cause());
+        assertEquals("", only(run(List.of(s("P1", "R1", "T1", "a", "It has a hood", 2)), CATALOG), "hood").grounding().cause());
     }
 
     @Test
