@@ -120,7 +120,7 @@ final class CoverageCommand implements Callable<Integer> {
         }
         Vocabulary v;
         try {
-            v = LabelCommand.vocabularyReader.apply(vocabFile);
+            v = LabelCommand.VOCABULARIES.apply(vocabFile);
         } catch (LabelCommand.VocabularyUnreadable e) {
             err.println("sheaf coverage: " + e.getMessage());
             return ExitCodes.FAILURE;

@@ -11,9 +11,9 @@ import dev.sheaf.miner.label.StratifiedSplit;
 import dev.sheaf.miner.text.Analysis;
 import dev.sheaf.miner.text.AnalysisProfile;
 import dev.sheaf.vocab.Vocabulary;
+import dev.sheaf.vocab.store.VocabularyStore;
 import java.io.IOException;
 import java.io.PrintWriter;
-import java.lang.reflect.InvocationTargetException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -104,8 +104,8 @@ final class LabelCommand implements Callable<Integer> {
     @Option(names = "--no-progress", description = "No progress bar on stderr (it is shown only on a terminal anyway).")
     boolean noProgress;
 
-    /** Reads vocabulary files; replaceable in tests. */
-    static Function<Path, Vocabulary> vocabularyReader = Vocabularies::read;
+    /** Reads vocabulary files. */
+    static final Function<Path, Vocabulary> VOCABULARIES = Vocabularies::read;
 
     @Override
     public Integer call() {
@@ -159,7 +159,7 @@ final class LabelCommand implements Callable<Integer> {
         }
         Vocabulary v;
         try {
-            v = vocabularyReader.apply(vocabFile);
+            v = VOCABULARIES.apply(vocabFile);
         } catch (VocabularyUnreadable e) {
             err.println("sheaf label: " + e.getMessage());
             return ExitCodes.FAILURE;
@@ -238,10 +238,7 @@ final class LabelCommand implements Callable<Integer> {
         }
     }
 
-    /**
-     * Reads a vocabulary file with the vocabulary module's store. The store is being merged from
-     * its own branch; until it is on the class path this says so instead of failing obscurely.
-     */
+    /** Reads a vocabulary file with the vocabulary store (read-only: no lock, no journal). */
     static final class Vocabularies {
         private Vocabularies() {
         }
@@ -249,18 +246,11 @@ final class LabelCommand implements Callable<Integer> {
         static Vocabulary read(Path file) {
             if (!Files.isRegularFile(file)) {
                 throw new VocabularyUnreadable("vocabulary file " + file + " does not exist; give the *.vocab.json file "
-                        + "the curator saves", null);
+                        + "the curator saves (or export one with 'sheaf export')", null);
             }
             try {
-                Class<?> store = Class.forName("dev.sheaf.vocab.store.VocabularyStore");
-                return (Vocabulary) store.getMethod("read", Path.class).invoke(null, file);
-            } catch (ClassNotFoundException | NoSuchMethodException e) {
-                throw new VocabularyUnreadable("this build of Sheaf cannot read vocabulary files yet (the vocabulary store "
-                        + "is not part of it); see README.md", e);
-            } catch (InvocationTargetException e) {
-                Throwable c = e.getCause();
-                throw new VocabularyUnreadable("cannot read the vocabulary " + file + ": " + c.getMessage(), c);
-            } catch (IllegalAccessException e) {
+                return VocabularyStore.read(file);
+            } catch (IOException e) {
                 throw new VocabularyUnreadable("cannot read the vocabulary " + file + ": " + e.getMessage(), e);
             }
         }

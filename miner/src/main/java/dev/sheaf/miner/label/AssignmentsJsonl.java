@@ -224,7 +224,7 @@ public final class AssignmentsJsonl {
             boolean applies = facets.isEmpty();
             boolean review = false;
             for (Concept f : facets) {
-                applies |= f.facet().appliesTo(o.path("category").asText(""));
+                applies |= Labeler.applies(f.facet(), o.path("category").asText(""));
                 review |= f.facet().regulatedClaim();
             }
             Assignment a;

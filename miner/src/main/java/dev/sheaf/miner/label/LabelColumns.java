@@ -98,7 +98,7 @@ final class LabelColumns {
             return true;
         }
         for (FacetProperties p : ps) {
-            if (p.appliesTo(category)) {
+            if (Labeler.applies(p, category)) {
                 return true;
             }
         }

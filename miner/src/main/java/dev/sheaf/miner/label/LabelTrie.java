@@ -23,6 +23,12 @@ import java.util.List;
  * thread.
  */
 final class LabelTrie {
+    /**
+     * The pseudo-token between two clauses of one text ("adj. hd", "90% down, 10% feathers"): a label
+     * holding a break character matches across a break in the text, and nothing else does.
+     */
+    static final int BREAK = -1;
+
     private final int[] rootChild;
     private final Long2IntOpenHashMap edges;
     private final int[][] entries;
@@ -89,15 +95,19 @@ final class LabelTrie {
             entries.add(null); // node 0 is the root, which never ends a label
         }
 
-        /** Adds a path; {@code entry} is recorded once at its end node. */
+        /**
+         * Adds a path; {@code entry} is recorded once at its end node. Ids are term ids (>= 0) or,
+         * inside the path only, {@link #BREAK}.
+         */
         void add(int[] ids, int entry) {
             if (ids.length == 0) {
                 throw new IllegalArgumentException("a label path needs at least one token");
             }
             int node = 0;
-            for (int id : ids) {
-                if (id < 0) {
-                    throw new IllegalArgumentException("term ids are >= 0, got " + id);
+            for (int k = 0; k < ids.length; k++) {
+                int id = ids[k];
+                if (id < 0 && (id != BREAK || k == 0 || k == ids.length - 1)) {
+                    throw new IllegalArgumentException("term ids are >= 0 (BREAK only inside a path), got " + id + " at " + k);
                 }
                 maxId = Math.max(maxId, id);
                 long key = ((long) node << 32) | (id & 0xffffffffL);

@@ -69,7 +69,7 @@ public final class Labeler {
 
     private final NumberFacet[] numberFacets;
     private final SpecKeyMatcher specKeyFacet;
-    private final Map<Dimension, Integer> dimensionFacet;
+    private final Map<Dimension, int[]> dimensionFacets;
 
     private final IntOpenHashSet negationIds = new IntOpenHashSet();
     private final IntOpenHashSet breakerIds = new IntOpenHashSet();
@@ -80,6 +80,8 @@ public final class Labeler {
     private final int lessId;
     private final int ofId;
     private final int fromId;
+    private final int wId;
+    private final int oId;
 
     private final List<String> notes = new ArrayList<>();
     private final int labelsCompiled;
@@ -110,6 +112,8 @@ public final class Labeler {
         lessId = wordId(compileSegmenter, "less", "affix");
         ofId = wordId(compileSegmenter, "of", "affix");
         fromId = wordId(compileSegmenter, "from", "affix");
+        wId = wordId(compileSegmenter, "w", "affix");
+        oId = wordId(compileSegmenter, "o", "affix");
 
         // concepts that can be assigned: every value, and yes/no facets (their own labels are the value)
         List<Concept> assignable = new ArrayList<>();
@@ -148,7 +152,7 @@ public final class Labeler {
         // number facets: their labels are cues in running text and keys in spec tables
         List<NumberFacet> nfs = new ArrayList<>();
         SpecKeyMatcher keys = new SpecKeyMatcher();
-        Map<Dimension, Integer> byDim = new EnumMap<>(Dimension.class);
+        Map<Dimension, List<Integer>> byDim = new EnumMap<>(Dimension.class);
         for (Concept f : vocabulary.facets()) {
             if (f.facet().valueKind() != ValueKind.NUMBER) {
                 continue;
@@ -165,7 +169,7 @@ public final class Labeler {
             }
             nfs.add(new NumberFacet(f.id(), f.facet(), dim));
             if (dim != null) {
-                byDim.merge(dim, idx, (a, b) -> -1);
+                byDim.computeIfAbsent(dim, k -> new ArrayList<>()).add(idx);
             }
             for (ConceptLabel l : f.labels()) {
                 int[] path = labelPath(compileSegmenter, f.id(), l);
@@ -173,17 +177,14 @@ public final class Labeler {
                     tb.add(path, -(idx + 1));
                     compiled++;
                 }
-                int prev = keys.add(l.text(), idx);
-                if (prev >= 0) {
-                    notes.add("spec key \"" + l.text() + "\" is a label of both " + nfs.get(prev).id + " and " + f.id()
-                            + "; spec rows with it go to " + nfs.get(prev).id);
-                }
+                keys.add(l.text(), idx);
             }
         }
-        byDim.values().removeIf(v -> v < 0);
         this.numberFacets = nfs.toArray(new NumberFacet[0]);
         this.specKeyFacet = keys;
-        this.dimensionFacet = Collections.unmodifiableMap(byDim);
+        Map<Dimension, int[]> dims = new EnumMap<>(Dimension.class);
+        byDim.forEach((d, l) -> dims.put(d, l.stream().mapToInt(Integer::intValue).toArray()));
+        this.dimensionFacets = Collections.unmodifiableMap(dims);
         this.trie = tb.build();
         this.labelsCompiled = compiled;
         this.workers = ThreadLocal.withInitial(Worker::new);
@@ -256,13 +257,18 @@ public final class Labeler {
             notes.add("label \"" + l.text() + "\" of " + conceptId + " has no words under the analysis profile; it can never match");
             return null;
         }
-        if (segments.size() > 1) {
-            notes.add("label \"" + l.text() + "\" of " + conceptId + " holds a break character (one of \""
-                    + analysis.profile().breakCharacters().replace("\n", "").replace("\r", "")
-                    + "\"), and no match crosses one; it can never match — remove the character from the label");
-            return null;
+        if (segments.size() == 1) {
+            return segments.get(0);
         }
-        return segments.get(0);
+        // a label with a break character inside ("adj. hd") matches across a break in the text there
+        it.unimi.dsi.fastutil.ints.IntArrayList path = new it.unimi.dsi.fastutil.ints.IntArrayList();
+        for (int[] seg : segments) {
+            if (!path.isEmpty()) {
+                path.add(LabelTrie.BREAK);
+            }
+            path.addAll(it.unimi.dsi.fastutil.ints.IntArrayList.wrap(seg));
+        }
+        return path.toIntArray();
     }
 
     private boolean applies(int concept, String category) {
@@ -271,11 +277,20 @@ public final class Labeler {
             return true;
         }
         for (FacetProperties p : ps) {
-            if (p.appliesTo(category)) {
+            if (applies(p, category)) {
                 return true;
             }
         }
         return false;
+    }
+
+    /**
+     * Whether a facet applies to a listing's category. A listing whose source gives no category
+     * (the empty string) is unknown, not wrong: every facet applies to it, so it is never reported
+     * as a category error and counts as applicable in fill rates.
+     */
+    public static boolean applies(FacetProperties facet, String category) {
+        return category == null || category.isEmpty() || facet.appliesTo(category);
     }
 
     /** A number facet as the labeler needs it. */
@@ -303,30 +318,38 @@ public final class Labeler {
 
         private Listing listing;
         private Field field;
+        private int bufField = -1;
+        private SegmentPart bufPart;
+        private int[] bIds = new int[256];
+        private int[] bStarts = new int[256];
+        private int[] bEnds = new int[256];
+        private int bn;
         private KeyState keyState;
         private String keyCue;
+        private int keyStateField;
 
         Assignments label(Listing l) {
             listing = l;
+            keyStateField = -1;
             matches.clear();
             numbers.clear();
+            // one token stream for the whole listing; segments arrive per field and part, in order
+            bufField = -1;
+            bn = 0;
+            segmenter.analyze(l, this);
+            flush();
             List<Field> fields = l.fields();
             for (int fi = 0; fi < fields.size(); fi++) {
                 Field f = fields.get(fi);
-                field = f;
                 if (f.kind() == FieldKind.SPEC) {
-                    valueState(f.text());
-                    segmenter.analyze(fi, SegmentPart.SPEC_KEY, f.key(), this);
-                    segmenter.analyze(fi, SegmentPart.SPEC_VALUE, f.text(), this);
-                    int nf = numberFacets.length == 0 ? -1 : specKeyFacet.facetOf(f.key());
-                    if (nf >= 0) {
-                        numbers.spec(nf, fi, f);
+                    int[] nfs = numberFacets.length == 0 ? NO_FACETS : specKeyFacet.facetsOf(f.key());
+                    if (nfs.length > 0) {
+                        numbers.spec(nfs, fi, f, l.category());
                     } else {
-                        numbers.text(fi, f, SegmentPart.SPEC_VALUE, f.text(), false);
+                        numbers.text(fi, f, SegmentPart.SPEC_VALUE, f.text(), false, l.category());
                     }
                 } else {
-                    segmenter.analyze(fi, SegmentPart.TEXT, f.text(), this);
-                    numbers.text(fi, f, SegmentPart.TEXT, f.text(), true);
+                    numbers.text(fi, f, SegmentPart.TEXT, f.text(), true, l.category());
                 }
             }
             List<Assignment> out = matches.assignments(l);
@@ -359,8 +382,50 @@ public final class Labeler {
             keyState = KeyState.POSITIVE;
         }
 
+        /**
+         * Collects the segments of one field text into one token sequence with {@link LabelTrie#BREAK}
+         * between them, so a label holding a break character can match across one; everything
+         * else treats a BREAK as the end of a clause.
+         */
         @Override
         public void segment(int fi, SegmentPart part, int[] ids, int[] starts, int[] ends, int n) {
+            if (fi != bufField || part != bufPart) {
+                flush();
+                bufField = fi;
+                bufPart = part;
+            }
+            int need = bn + n + 1;
+            if (need > bIds.length) {
+                int cap = Math.max(need, bIds.length * 2);
+                bIds = java.util.Arrays.copyOf(bIds, cap);
+                bStarts = java.util.Arrays.copyOf(bStarts, cap);
+                bEnds = java.util.Arrays.copyOf(bEnds, cap);
+            }
+            if (bn > 0) {
+                bIds[bn] = LabelTrie.BREAK;
+                bStarts[bn] = bEnds[bn - 1];
+                bEnds[bn] = starts[0];
+                bn++;
+            }
+            System.arraycopy(ids, 0, bIds, bn, n);
+            System.arraycopy(starts, 0, bStarts, bn, n);
+            System.arraycopy(ends, 0, bEnds, bn, n);
+            bn += n;
+        }
+
+        private void flush() {
+            if (bn > 0) {
+                match(bufField, bufPart, bIds, bStarts, bEnds, bn);
+                bn = 0;
+            }
+        }
+
+        private void match(int fi, SegmentPart part, int[] ids, int[] starts, int[] ends, int n) {
+            field = listing.fields().get(fi);
+            if (part == SegmentPart.SPEC_KEY && keyStateField != fi) {
+                valueState(field.text());
+                keyStateField = fi;
+            }
             String text = part == SegmentPart.SPEC_KEY ? field.key() : field.text();
             if (matched.length < n) {
                 matched = new boolean[Math.max(n, matched.length * 2)];
@@ -429,8 +494,11 @@ public final class Labeler {
                     continue;
                 }
                 int t = ids[k];
-                if (breakerIds.contains(t)) {
+                if (t == LabelTrie.BREAK || breakerIds.contains(t)) {
                     return null;
+                }
+                if (t == oId && k > 0 && ids[k - 1] == wId && slash(text, ends[k - 1], starts[k])) {
+                    return text.substring(starts[k - 1], ends[k]); // "w/o": without
                 }
                 if (negationIds.contains(t)) {
                     if (k + 1 < n && hyphen(text, ends[k], starts[k + 1])) {
@@ -463,6 +531,10 @@ public final class Labeler {
             }
         }
         return true;
+    }
+
+    private static boolean slash(String text, int from, int to) {
+        return to - from == 1 && text.charAt(from) == '/';
     }
 
     private static boolean hyphen(String text, int from, int to) {
@@ -545,40 +617,93 @@ public final class Labeler {
             cues.add(new int[] {facet, fi, part.ordinal(), endChar});
         }
 
-        /** A spec row whose key is a number facet's label. */
-        void spec(int nf, int fi, Field f) {
-            NumberFacet facet = numberFacets[nf];
+        /**
+         * A spec row whose key is a number facet's label. When the key names several facets, the
+         * first one whose dimension the value measures (and which applies to the category) wins.
+         * The value is read strictly first ({@code Quantities.parse}: one quantity, perhaps restated
+         * in other units); failing that, the quantities in it are taken — the first one, plus any
+         * later one in the same unit with another number ("Fly 2,000 mm / floor 6,000 mm": two
+         * values), while a later one in another unit is a restatement ("350 g (12.4 oz) per shoe");
+         * a facet whose unit Sheaf does not know takes a lone number ("R 6.2", "50+").
+         */
+        void spec(int[] candidates, int fi, Field f, String category) {
             String value = f.text();
             if (value.isBlank()) {
                 return;
             }
-            java.util.Optional<dev.sheaf.miner.text.Quantity> q = dev.sheaf.miner.text.Quantities.parse(f.key(), value);
-            if (q.isPresent()) {
-                dev.sheaf.miner.text.Quantity x = q.get();
-                if (facet.dimension != null && x.dimension() != facet.dimension) {
-                    invalid.add(new InvalidValue(facet.id, fi, f.key(), value, "expected a " + word(facet.dimension)
-                            + " in " + facet.props.unit() + ", found a " + word(x.dimension()) + " (\"" + x.surface() + "\")"));
-                    return;
+            java.util.Optional<dev.sheaf.miner.text.Quantity> strict = dev.sheaf.miner.text.Quantities.parse(f.key(), value);
+            List<dev.sheaf.miner.text.Quantity> found = strict.isPresent() ? List.of(strict.get())
+                    : dev.sheaf.miner.text.Quantities.find(value);
+            int nf = pick(candidates, found, category);
+            NumberFacet facet = numberFacets[nf];
+            List<dev.sheaf.miner.text.Quantity> usable = new ArrayList<>();
+            for (dev.sheaf.miner.text.Quantity q : found) {
+                if (facet.dimension == null ? facet.props.unit() == null || q.unit().equalsIgnoreCase(facet.props.unit())
+                        : q.dimension() == facet.dimension) {
+                    usable.add(q);
                 }
-                add(nf, x.value(), x.valueMax(), x.unit(), new Evidence(fi, f.kind(), f.key(), SegmentPart.SPEC_VALUE,
-                        x.start(), x.end(), x.surface(), null, Polarity.STATED, null), fi, f, value);
-                return;
             }
-            String unit = SpecKeyForms.unitSuffix(f.key());
-            if (unit == null && facet.dimension == null) {
-                unit = facet.props.unit();
+            if (!usable.isEmpty()) {
+                String firstUnit = usable.get(0).unit();
+                for (dev.sheaf.miner.text.Quantity q : usable) {
+                    if (q == usable.get(0) || q.unit().equals(firstUnit)) {
+                        add(nf, q.value(), q.valueMax(), q.unit(), new Evidence(fi, f.kind(), f.key(), SegmentPart.SPEC_VALUE,
+                                q.start(), q.end(), q.surface(), null, Polarity.STATED, null), fi, f, value);
+                    }
+                }
+                return;
             }
             String plain = value.strip();
-            if (PLAIN_NUMBER.matcher(plain).matches() && (unit != null || facet.props.unit() == null)) {
+            String unit = SpecKeyForms.unitSuffix(f.key());
+            if (PLAIN_NUMBER.matcher(plain).matches() && (unit != null || facet.dimension == null)) {
                 int start = value.indexOf(plain);
                 double v = Double.parseDouble(plain.replace(",", ""));
-                add(nf, v, v, unit, new Evidence(fi, f.kind(), f.key(), SegmentPart.SPEC_VALUE, start, start + plain.length(),
-                        plain, null, Polarity.STATED, null), fi, f, value);
+                add(nf, v, v, unit != null ? unit : facet.props.unit(), new Evidence(fi, f.kind(), f.key(), SegmentPart.SPEC_VALUE,
+                        start, start + plain.length(), plain, null, Polarity.STATED, null), fi, f, value);
                 return;
             }
-            invalid.add(new InvalidValue(facet.id, fi, f.key(), value, "expected "
-                    + (facet.props.unit() == null ? "a number" : "a number with a unit, such as \"1.2 " + facet.props.unit() + "\"")
-                    + ", found \"" + value.strip() + "\""));
+            if (facet.dimension == null && found.isEmpty()) {
+                java.util.regex.Matcher m = NUMBER_IN_TEXT.matcher(value);
+                if (m.find()) {
+                    int start = m.start();
+                    int end = m.end();
+                    if (!m.find()) {
+                        double v = Double.parseDouble(value.substring(start, end).replace(",", ""));
+                        add(nf, v, v, facet.props.unit(), new Evidence(fi, f.kind(), f.key(), SegmentPart.SPEC_VALUE, start, end,
+                                value.substring(start, end), null, Polarity.STATED, null), fi, f, value);
+                        return;
+                    }
+                }
+            }
+            String reason;
+            if (!found.isEmpty() && facet.dimension != null) {
+                reason = "expected a " + word(facet.dimension) + " in " + facet.props.unit() + ", found a "
+                        + word(found.get(0).dimension()) + " (\"" + found.get(0).surface() + "\")";
+            } else {
+                reason = "expected " + (facet.props.unit() == null ? "a number" : "a number with a unit, such as \"1.2 "
+                        + facet.props.unit() + "\"") + ", found \"" + value.strip() + "\"";
+            }
+            invalid.add(new InvalidValue(facet.id, fi, f.key(), value, reason));
+        }
+
+        /** The candidate facet whose dimension the value measures and which applies, else the first. */
+        private int pick(int[] candidates, List<dev.sheaf.miner.text.Quantity> found, String category) {
+            if (candidates.length == 1) {
+                return candidates[0];
+            }
+            for (dev.sheaf.miner.text.Quantity q : found) {
+                for (int c : candidates) {
+                    if (numberFacets[c].dimension == q.dimension() && applies(numberFacets[c].props, category)) {
+                        return c;
+                    }
+                }
+            }
+            for (int c : candidates) {
+                if (applies(numberFacets[c].props, category)) {
+                    return c;
+                }
+            }
+            return candidates[0];
         }
 
         /**
@@ -586,15 +711,14 @@ public final class Labeler {
          * key says what the number is ("Packed weight: 3 kg" is not the weight), so only a facet label
          * inside the value links it, never the dimension alone.
          */
-        void text(int fi, Field f, SegmentPart part, String text, boolean byDimension) {
+        void text(int fi, Field f, SegmentPart part, String text, boolean byDimension, String category) {
             if (numberFacets.length == 0 || !hasDigit(text)) {
                 return;
             }
             for (dev.sheaf.miner.text.Quantity q : dev.sheaf.miner.text.Quantities.find(text)) {
                 int nf = cuedFacet(fi, part, text, q);
                 if (nf < 0 && byDimension && options.quantityByDimension()) {
-                    Integer only = dimensionFacet.get(q.dimension());
-                    nf = only == null ? -1 : only;
+                    nf = onlyFacetOf(q.dimension(), category);
                 }
                 if (nf < 0) {
                     continue;
@@ -602,6 +726,24 @@ public final class Labeler {
                 add(nf, q.value(), q.valueMax(), q.unit(), new Evidence(fi, f.kind(), f.key(), part, q.start(), q.end(),
                         q.surface(), null, Polarity.STATED, null), fi, f, null);
             }
+        }
+
+        /** The one number facet of this dimension that applies to the category, or -1 (none, or several). */
+        private int onlyFacetOf(Dimension d, String category) {
+            int[] fs = dimensionFacets.get(d);
+            if (fs == null) {
+                return -1;
+            }
+            int found = -1;
+            for (int f : fs) {
+                if (applies(numberFacets[f].props, category)) {
+                    if (found >= 0) {
+                        return -1;
+                    }
+                    found = f;
+                }
+            }
+            return found;
         }
 
         private int cuedFacet(int fi, SegmentPart part, String text, dev.sheaf.miner.text.Quantity q) {
@@ -688,7 +830,7 @@ public final class Labeler {
                 nv.evidence.sort(java.util.Comparator.comparingInt(Evidence::field).thenComparingInt(e -> e.part().ordinal())
                         .thenComparingInt(Evidence::start));
                 out.add(new Assignment(facet.id, facet.id, Polarity.STATED, nv.evidence, nv.value, nv.valueMax, nv.unit, bucket,
-                        facet.props.appliesTo(l.category()), facet.props.regulatedClaim()));
+                        applies(facet.props, l.category()), facet.props.regulatedClaim()));
             }
         }
     }
@@ -716,6 +858,12 @@ public final class Labeler {
     private static String word(Dimension d) {
         return d.name().toLowerCase(Locale.ROOT).replace('_', ' ');
     }
+
+    private static final int[] NO_FACETS = new int[0];
+
+    /** A number in running text: digits with optional thousands commas and a decimal part. */
+    private static final java.util.regex.Pattern NUMBER_IN_TEXT = java.util.regex.Pattern.compile(
+            "(?<![0-9.,])[0-9]{1,3}(,[0-9]{3})+(\\.[0-9]+)?(?![0-9])|(?<![0-9.,])[0-9]+(\\.[0-9]+)?(?![0-9])");
 
     private static final java.util.regex.Pattern PLAIN_NUMBER = java.util.regex.Pattern.compile("[0-9]{1,3}(,[0-9]{3})+(\\.[0-9]+)?|[0-9]+(\\.[0-9]+)?");
 

@@ -18,46 +18,57 @@ import java.util.concurrent.ConcurrentHashMap;
 final class SpecKeyMatcher {
     static final int CACHE_LIMIT = 100_000;
 
-    private final Map<String, Integer> exact = new LinkedHashMap<>();
+    private static final int[] NONE = new int[0];
+
+    private final Map<String, int[]> exact = new LinkedHashMap<>();
     private final List<String> labels = new ArrayList<>();
     private final List<Integer> facetOfLabel = new ArrayList<>();
-    private final Map<String, Integer> cache = new ConcurrentHashMap<>();
+    private final Map<String, int[]> cache = new ConcurrentHashMap<>();
 
-    /** Adds a label of facet {@code facet}; returns the facet that already had this key form, or -1. */
-    int add(String label, int facet) {
+    /**
+     * Adds a label of facet {@code facet}. Several facets may share a key form ("Capacity" of a
+     * pack's volume and of a tent's persons); the labeler then picks by the value's dimension.
+     */
+    void add(String label, int facet) {
         String key = SpecKeys.normalise(label);
         if (key.isEmpty()) {
-            return -1;
+            return;
         }
         labels.add(label);
         facetOfLabel.add(facet);
-        Integer prev = exact.putIfAbsent(key, facet);
-        return prev == null || prev == facet ? -1 : prev;
+        int[] prev = exact.get(key);
+        if (prev == null) {
+            exact.put(key, new int[] {facet});
+        } else if (java.util.Arrays.stream(prev).noneMatch(x -> x == facet)) {
+            int[] next = java.util.Arrays.copyOf(prev, prev.length + 1);
+            next[prev.length] = facet;
+            exact.put(key, next);
+        }
     }
 
     boolean isEmpty() {
         return labels.isEmpty();
     }
 
-    /** The facet index of a raw spec key, or -1. */
-    int facetOf(String rawKey) {
-        Integer hit = cache.get(rawKey);
+    /** The facet indices a raw spec key may belong to, in label order; empty for none. */
+    int[] facetsOf(String rawKey) {
+        int[] hit = cache.get(rawKey);
         if (hit != null) {
             return hit;
         }
-        int f = compute(rawKey);
+        int[] f = compute(rawKey);
         if (cache.size() < CACHE_LIMIT) {
             cache.put(rawKey, f);
         }
         return f;
     }
 
-    private int compute(String rawKey) {
+    private int[] compute(String rawKey) {
         String key = SpecKeys.normalise(rawKey);
         if (key.isEmpty()) {
-            return -1;
+            return NONE;
         }
-        Integer f = exact.get(key);
+        int[] f = exact.get(key);
         if (f != null) {
             return f;
         }
@@ -70,9 +81,9 @@ final class SpecKeyMatcher {
             pair.put(labels.get(i), 1L);
             List<SpecKeyCluster> clusters = SpecKeys.cluster(pair);
             if (clusters.size() == 1 && clusters.get(0).members().size() == 2) {
-                return facetOfLabel.get(i);
+                return new int[] {facetOfLabel.get(i)};
             }
         }
-        return -1;
+        return NONE;
     }
 }

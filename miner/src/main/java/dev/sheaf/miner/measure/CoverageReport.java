@@ -4,6 +4,7 @@ import dev.sheaf.miner.label.Assignment;
 import dev.sheaf.miner.label.Assignments;
 import dev.sheaf.miner.label.AssignmentsJsonl;
 import dev.sheaf.miner.label.InvalidValue;
+import dev.sheaf.miner.label.Labeler;
 import dev.sheaf.vocab.Concept;
 import dev.sheaf.vocab.FacetProperties;
 import dev.sheaf.vocab.ValueKind;
@@ -352,7 +353,7 @@ public final class CoverageReport {
             for (Map.Entry<Integer, Set<String>> e : facetValues.entrySet()) {
                 int f = e.getKey();
                 FacetProperties p = facetConcepts[f].facet();
-                if (!p.appliesTo(a.category())) {
+                if (!Labeler.applies(p, a.category())) {
                     continue; // a likely error, listed by the label stage; it fills nothing here
                 }
                 filled.addTo(key(f, cat), 1);
@@ -371,7 +372,7 @@ public final class CoverageReport {
             Set<Integer> invalidFacets = new TreeSet<>();
             for (InvalidValue iv : a.invalid()) {
                 int f = facetIndex.getInt(iv.facetId());
-                if (f >= 0 && !facetValues.containsKey(f) && facetConcepts[f].facet().appliesTo(a.category())) {
+                if (f >= 0 && !facetValues.containsKey(f) && Labeler.applies(facetConcepts[f].facet(), a.category())) {
                     invalidFacets.add(f);
                 }
             }
@@ -420,7 +421,7 @@ public final class CoverageReport {
                 return true;
             }
             for (int f : conceptFacets[c]) {
-                if (facetConcepts[f].facet().appliesTo(category)) {
+                if (Labeler.applies(facetConcepts[f].facet(), category)) {
                     return true;
                 }
             }
@@ -510,7 +511,7 @@ public final class CoverageReport {
                 for (String cat : cats) {
                     int k = categoryIndex.getInt(cat);
                     long size = perCategory.getInt(k);
-                    long app = p.appliesTo(cat) ? size : 0;
+                    long app = Labeler.applies(p, cat) ? size : 0;
                     long fl = filled.get(key(f, k));
                     long inv = invalid.get(key(f, k));
                     long cf = conflicts.get(key(f, k));

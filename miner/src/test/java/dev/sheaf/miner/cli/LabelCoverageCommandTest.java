@@ -4,7 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.sheaf.miner.label.LabelFixtures;
-import dev.sheaf.vocab.Vocabulary;
+import dev.sheaf.vocab.store.VocabularyStore;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.StringWriter;
@@ -12,18 +12,13 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.function.Function;
-import org.junit.jupiter.api.AfterEach;
-import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
-/** {@code sheaf label} and {@code sheaf coverage} on a small Fernhollow-style catalog, through the command line. */
+/** {@code sheaf label} and {@code sheaf coverage} on a small Fernhollow-style catalog and vocabulary file, through the command line. */
 class LabelCoverageCommandTest {
     @TempDir
     Path dir;
-
-    private Function<Path, Vocabulary> saved;
 
     private record Run(int code, String out, String err) {
     }
@@ -33,24 +28,6 @@ class LabelCoverageCommandTest {
         StringWriter err = new StringWriter();
         int code = Main.commandLine(new PrintWriter(out, true), new PrintWriter(err, true)).execute(args);
         return new Run(code, out.toString(), err.toString());
-    }
-
-    @BeforeEach
-    void fixtureVocabulary() {
-        // The vocabulary file reader belongs to the vocabulary module's store; these tests hand the
-        // fixture vocabulary in for any existing file so they do not depend on that file format.
-        saved = LabelCommand.vocabularyReader;
-        LabelCommand.vocabularyReader = p -> {
-            if (!Files.isRegularFile(p)) {
-                throw new LabelCommand.VocabularyUnreadable("vocabulary file " + p + " does not exist", null);
-            }
-            return LabelFixtures.vocabulary();
-        };
-    }
-
-    @AfterEach
-    void restore() {
-        LabelCommand.vocabularyReader = saved;
     }
 
     private Path catalog() throws IOException {
@@ -67,7 +44,7 @@ class LabelCoverageCommandTest {
         Files.writeString(cat.resolve("packs.csv"), "sku,name,category,description,Capacity\n"
                 + "FH-2001,Scree 30,packs,\"Water resistant ripstop nylon pack, PFC-free DWR\",30 L\n"
                 + "FH-2002,Scree 45,packs,\"Water resistant merino wool hip belt\",45 L\n", StandardCharsets.UTF_8);
-        Files.writeString(dir.resolve("ws/fernhollow.vocab.json"), "{}", StandardCharsets.UTF_8);
+        VocabularyStore.write(dir.resolve("ws/fernhollow.vocab.json"), LabelFixtures.vocabulary());
         return cat;
     }
 
@@ -156,10 +133,19 @@ class LabelCoverageCommandTest {
     @Test
     void aMissingVocabularyFileIsAFailureNamingTheFile() throws IOException {
         Path cat = catalog();
-        LabelCommand.vocabularyReader = saved;
         Run r = run("label", cat.toString(), "--vocab", dir.resolve("missing.vocab.json").toString(), "--out", dir.resolve("o").toString());
         assertEquals(ExitCodes.FAILURE, r.code());
         assertTrue(r.err().contains("missing.vocab.json does not exist"), r.err());
+    }
+
+    @Test
+    void aFileThatIsNotAVocabularyIsAFailureSayingWhereItBreaks() throws IOException {
+        Path cat = catalog();
+        Path bad = dir.resolve("bad.vocab.json");
+        Files.writeString(bad, "{\"format\": \"something-else\"}", StandardCharsets.UTF_8);
+        Run r = run("label", cat.toString(), "--vocab", bad.toString(), "--out", dir.resolve("o").toString());
+        assertEquals(ExitCodes.FAILURE, r.code());
+        assertTrue(r.err().contains("cannot read the vocabulary"), r.err());
     }
 
     @Test

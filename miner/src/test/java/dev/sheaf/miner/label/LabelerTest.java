@@ -283,11 +283,75 @@ class LabelerTest {
     @Test
     void labelsThatCanNeverMatchAreNoted() {
         Vocabulary v = Vocabulary.of(SchemeInfo.of("t", "t"),
-                List.of(Concept.builder("odd").prefLabel("nylon, waxed").build(), Concept.builder("dots").prefLabel("...").build()),
+                List.of(Concept.builder("dots").prefLabel("...").build(), Concept.builder("ok").prefLabel("nylon").build()),
                 List.of(), List.of());
         Labeler l = Labeler.of(v, Analysis.of(AnalysisProfile.defaults()));
-        assertEquals(2, l.notes().size(), l.notes().toString());
-        assertEquals(0, l.labelsCompiled());
+        assertEquals(1, l.notes().size(), l.notes().toString());
+        assertTrue(l.notes().get(0).contains("\"...\""));
+        assertEquals(1, l.labelsCompiled());
+    }
+
+    @Test
+    void aLabelWithABreakCharacterMatchesAcrossABreakThereAndNowhereElse() {
+        Vocabulary v = Vocabulary.of(SchemeInfo.of("t", "t"), List.of(
+                Concept.builder("adjustable-hood").prefLabel("adjustable hood").altLabel("adj. hd").build(),
+                Concept.builder("blend").prefLabel("88% nylon, 12% elastane").build(),
+                Concept.builder("hd").prefLabel("hd").build()), List.of(), List.of());
+        Labeler l = Labeler.of(v, Analysis.of(AnalysisProfile.defaults()));
+        assertEquals(List.of("adjustable-hood"), ids(l, "ADJ. HD, 2W zip"));
+        assertEquals(List.of("blend"), ids(l, "Shell: 88% nylon, 12% elastane"));
+        // a break in the text stops what has none in the label, and ends a negation's scope
+        assertEquals(List.of("hd"), ids(l, "adj hd"), "no break in the text: the label with one does not match");
+        assertEquals(Polarity.STATED, l.label(text("jackets", "No zips. Hd")).assignments().get(0).polarity());
+    }
+
+    private static List<String> ids(Labeler l, String text) {
+        return l.label(text("jackets", text)).assignments().stream().map(Assignment::conceptId).toList();
+    }
+
+    @Test
+    void withoutWrittenWSlashONegates() {
+        assertEquals(Map.of("hooded", "negated"), concepts("jackets", "Shell jkt w/o hood"));
+        assertEquals("W/O", only(text("jackets", "W/O HOOD"), "hooded").evidence().get(0).cue());
+    }
+
+    @Test
+    void aListingWithNoCategoryIsNeverACategoryError() {
+        Assignment a = only(text("", "non-slip cuffs"), "non-slip");
+        assertTrue(a.applies(), "the category is unknown, not wrong");
+    }
+
+    @Test
+    void theDimensionFallbackOnlyConsidersFacetsThatApplyToTheCategory() {
+        // capacity (L) applies to packs only: a litre in a stove listing is no pack volume
+        assertTrue(labeler.label(text("stoves", "Boils 1 L in 3 min")).assignments().isEmpty());
+        assertEquals(30.0, only(text("packs", "Holds 30 L of gear"), "capacity").value());
+        // but a named facet still takes its number, and is then a likely error
+        Assignment cued = only(text("stoves", "capacity 1 L"), "capacity");
+        assertFalse(cued.applies());
+    }
+
+    @Test
+    void specValuesWithWordsAroundOrSeveralUnitsAreStillRead() {
+        Assignment shoe = only(listing("F", "footwear", Field.spec("Weight", "350 g (12.4 oz) per shoe, size 9")), "weight");
+        assertEquals(0.35, shoe.value(), 1e-12);
+        assertEquals(1, shoe.evidence().size());
+        assertEquals("350 g", shoe.evidence().get(0).text());
+        Assignments two = labeler.label(listing("T", "tents", Field.spec("Weight", "body 1.2 kg / fly 0.4 kg")));
+        assertEquals(List.of(0.4, 1.2), two.assignments().stream().map(Assignment::value).toList(), "same unit twice: two values");
+        Assignment comfort = only(listing("S", "sleeping-bags", Field.spec("Comfort rating", "Comfort 1 °C / 34 °F")), "comfort-rating");
+        assertEquals(1.0, comfort.value(), 1e-12, "34 °F restates 1 °C");
+    }
+
+    @Test
+    void aFacetInAUnitSheafDoesNotKnowTakesALoneNumber() {
+        Vocabulary v = Vocabulary.of(SchemeInfo.of("t", "t"), List.of(Concept.builder("r-value").prefLabel("R-value")
+                .facet(dev.sheaf.vocab.FacetProperties.number("m²·K/W", List.of())).build()), List.of(), List.of());
+        Labeler l = Labeler.of(v, Analysis.of(AnalysisProfile.defaults()));
+        assertEquals(6.2, l.label(listing("P", "sleeping-pads", Field.spec("R-value", "R 6.2"))).assignments().get(0).value());
+        assertEquals("m²·K/W", l.label(listing("P", "sleeping-pads", Field.spec("R value", "4.5"))).assignments().get(0).unit());
+        assertEquals(1, l.label(listing("P", "sleeping-pads", Field.spec("R-value", "R 2 to R 4"))).invalid().size());
+        assertEquals(1, l.notes().size(), "the unit is noted once");
     }
 
     @Test
