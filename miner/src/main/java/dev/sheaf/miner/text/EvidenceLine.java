@@ -49,7 +49,29 @@ public record EvidenceLine(String listingId, String source, String locator, Stri
         return new EvidenceLine(listingId, source, locator, field, key, left, oneLine(text.substring(start, end)), right, start, end);
     }
 
+    /** Every run of whitespace (as the regex {@code \\s+}: space, tab, line breaks, form feed, vertical tab) becomes one space. */
     private static String oneLine(String s) {
-        return s.replaceAll("\\s+", " ");
+        StringBuilder b = null;
+        int n = s.length();
+        for (int i = 0; i < n; i++) {
+            char c = s.charAt(i);
+            boolean ws = c == ' ' || c == '\t' || c == '\n' || c == '\r' || c == '\f' || c == '\u000B';
+            if (ws && (c != ' ' || (i + 1 < n && isWs(s.charAt(i + 1))))) {
+                if (b == null) {
+                    b = new StringBuilder(n).append(s, 0, i);
+                }
+                b.append(' ');
+                while (i + 1 < n && isWs(s.charAt(i + 1))) {
+                    i++;
+                }
+            } else if (b != null) {
+                b.append(c);
+            }
+        }
+        return b == null ? s : b.toString();
+    }
+
+    private static boolean isWs(char c) {
+        return c == ' ' || c == '\t' || c == '\n' || c == '\r' || c == '\f' || c == '\u000B';
     }
 }

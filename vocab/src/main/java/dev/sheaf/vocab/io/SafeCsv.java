@@ -33,7 +33,7 @@ public final class SafeCsv implements AutoCloseable {
     public void row(Object... cells) throws IOException {
         boolean first = true;
         for (Object c : cells) {
-            boolean neutralised = !(c instanceof Number) && c != null && isDangerous(c.toString());
+            boolean neutralised = !(c instanceof Number) && c != null && needsPrefix(c.toString());
             (neutralised ? QUOTED : FORMAT).print(cell(c), out, first);
             first = false;
         }
@@ -75,7 +75,30 @@ public final class SafeCsv implements AutoCloseable {
         if (s.isEmpty()) {
             return s;
         }
-        return isDangerous(s) ? "'" + s : s;
+        return needsPrefix(s) ? "'" + s : s;
+    }
+
+    /**
+     * Undoes {@link #neutralise} on a cell read back: a leading {@code '} is removed when what
+     * follows is dangerous or itself starts with {@code '}. Because {@code neutralise} also
+     * prefixes text that already starts with {@code '} followed by such a character, every
+     * string survives neutralise → restore unchanged ("'=x" is written "''=x" and read back "'=x";
+     * "'90s" is left alone both ways).
+     */
+    public static String restore(String cell) {
+        if (cell.length() > 1 && cell.charAt(0) == '\'' && (isDangerous(cell.substring(1)) || cell.charAt(1) == '\'')) {
+            return cell.substring(1);
+        }
+        return cell;
+    }
+
+    /** The format to read Sheaf's CSV back with (RFC 4180, first record is the header); restore each cell with {@link #restore}. */
+    public static CSVFormat readFormat() {
+        return FORMAT.builder().setHeader().setSkipHeaderRecord(true).get();
+    }
+
+    private static boolean needsPrefix(String s) {
+        return isDangerous(s) || s.length() > 1 && s.charAt(0) == '\'' && (isDangerous(s.substring(1)) || s.charAt(1) == '\'');
     }
 
     private static boolean isDangerous(String s) {

@@ -39,4 +39,18 @@ class SafeCsvTest {
         // RFC 4180 §2.7: a double quote inside a quoted field is escaped by another double quote [pub]
         assertEquals("\"say \"\"hi\"\"\"\r\n", write("say \"hi\""));
     }
+
+    @ParameterizedTest
+    @ValueSource(strings = {"=1+2\";=1+2", "-20 °C rated", "+loft", "@home", "\tindent", "'=already", "''", "'",
+            "'90s style", "plain", "", "'-", "a|b"})
+    void restoreUndoesNeutraliseForEveryString(String s) {
+        assertEquals(s, SafeCsv.restore(SafeCsv.neutralise(s)));
+    }
+
+    @Test
+    void aCellAlreadyStartingWithAQuoteBeforeAFormulaIsQuotedAgain() throws Exception {
+        // without the extra quote, "'=x" would read back as "=x"
+        assertEquals("\"''=x\"\r\n", write("'=x"));
+        assertEquals("'90s\r\n", write("'90s"));
+    }
 }

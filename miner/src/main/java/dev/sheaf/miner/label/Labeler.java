@@ -1,0 +1,752 @@
+package dev.sheaf.miner.label;
+
+import dev.sheaf.miner.ingest.Field;
+import dev.sheaf.miner.ingest.FieldKind;
+import dev.sheaf.miner.ingest.Listing;
+import dev.sheaf.miner.text.Analysis;
+import dev.sheaf.miner.text.AnalysisProfile;
+import dev.sheaf.miner.text.Dimension;
+import dev.sheaf.miner.text.SegmentPart;
+import dev.sheaf.miner.text.Segmenter;
+import dev.sheaf.vocab.Concept;
+import dev.sheaf.vocab.ConceptLabel;
+import dev.sheaf.vocab.FacetProperties;
+import dev.sheaf.vocab.LabelKind;
+import dev.sheaf.vocab.ValueKind;
+import dev.sheaf.vocab.Vocabulary;
+import dev.sheaf.miner.text.Units;
+import it.unimi.dsi.fastutil.ints.IntOpenHashSet;
+import java.util.ArrayList;
+import java.util.Collection;
+import java.util.Collections;
+import java.util.EnumMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Objects;
+import java.util.Set;
+
+/**
+ * The labeling stage's front door: a vocabulary compiled into one matcher and run over every field
+ * of a listing. Thread-safe: one instance serves every thread (each thread gets its own token
+ * buffers), so {@code Ingest.run(l -> sink.accept(labeler.label(l)))} labels on all cores.
+ *
+ * <p><b>Tokens.</b> Every label (preferred, alternative and hidden, in every language) goes through
+ * the same analysis profile the miner used — same tokenizer, possessives, lower case, folding and
+ * unit splitting — with one difference: stop words and negation words stay in the token sequence
+ * as ordinary tokens. The miner needs a removed stop word as a boundary so it never invents
+ * n-grams; the labeler needs the full sequence so "made in USA", "no-see-um mesh" and "water
+ * resistant" match exactly as written, and so it can see the negation words it decides polarity
+ * with. A match never crosses a field, a spec key/value border or one of the profile's break
+ * characters (docs/decisions/100-label-matching.md).
+ *
+ * <p><b>Matching.</b> Leftmost-longest, no overlaps: scanning each clause left to right, the
+ * longest label starting at a token wins and the scan resumes after it ({@link LabelTrie}).
+ *
+ * <p><b>Polarity</b> ({@link Polarity}): see {@link LabelOptions} and docs/decisions/101. A label
+ * that itself holds a negation ("non-slip", "PFC-free", "no-see-um") is matched whole by the
+ * longest-match rule and so is a positive of that label.
+ *
+ * <p><b>Numbers</b>: spec rows whose key is a number facet's label (compared in spec-key form) are
+ * read with {@code Quantities.parse} and converted to the facet's unit with {@code Units.convert};
+ * quantities in running text go to a number facet named just before them, or to the only number
+ * facet of their dimension (docs/decisions/102).
+ *
+ * <p>Assignments whose facet does not apply to the listing's category are kept and marked
+ * ({@link Assignment#applies()} false) so they can be reported as likely errors.
+ */
+public final class Labeler {
+    private final Vocabulary vocabulary;
+    private final Analysis analysis;
+    private final Analysis tokens;
+    private final LabelOptions options;
+    private final LabelTrie trie;
+
+    private final String[] conceptIds;
+    private final String[] conceptFacet;
+    private final FacetProperties[][] conceptFacetProps;
+    private final boolean[] conceptReview;
+
+    private final NumberFacet[] numberFacets;
+    private final SpecKeyMatcher specKeyFacet;
+    private final Map<Dimension, Integer> dimensionFacet;
+
+    private final IntOpenHashSet negationIds = new IntOpenHashSet();
+    private final IntOpenHashSet breakerIds = new IntOpenHashSet();
+    private final IntOpenHashSet exceptionIds = new IntOpenHashSet();
+    private final Set<String> negationWords;
+    private final int nonId;
+    private final int freeId;
+    private final int lessId;
+    private final int ofId;
+    private final int fromId;
+
+    private final List<String> notes = new ArrayList<>();
+    private final int labelsCompiled;
+    private final ThreadLocal<Worker> workers;
+
+    private Labeler(Vocabulary vocabulary, Analysis analysis, LabelOptions options) {
+        this.vocabulary = Objects.requireNonNull(vocabulary, "vocabulary");
+        this.analysis = Objects.requireNonNull(analysis, "analysis");
+        this.options = Objects.requireNonNull(options, "options");
+        this.tokens = Analysis.of(labelingProfile(analysis.profile()));
+        Segmenter compileSegmenter = tokens.newSegmenter();
+
+        for (String w : analysis.profile().negationWords()) {
+            negationIds.add(wordId(compileSegmenter, w, "negation word"));
+            if (w.indexOf('\'') >= 0) {
+                negationIds.add(wordId(compileSegmenter, w.replace('\'', '\u2019'), "negation word"));
+            }
+        }
+        this.negationWords = analysis.profile().negationWords();
+        for (String w : options.scopeBreakers()) {
+            breakerIds.add(wordId(compileSegmenter, w, "scope breaker"));
+        }
+        for (String w : options.cueExceptions()) {
+            exceptionIds.add(wordId(compileSegmenter, w, "cue exception"));
+        }
+        nonId = wordId(compileSegmenter, "non", "affix");
+        freeId = wordId(compileSegmenter, "free", "affix");
+        lessId = wordId(compileSegmenter, "less", "affix");
+        ofId = wordId(compileSegmenter, "of", "affix");
+        fromId = wordId(compileSegmenter, "from", "affix");
+
+        // concepts that can be assigned: every value, and yes/no facets (their own labels are the value)
+        List<Concept> assignable = new ArrayList<>();
+        for (Concept c : vocabulary.allConcepts()) {
+            if (!c.isFacet() || c.facet().valueKind() == ValueKind.YES_NO) {
+                assignable.add(c);
+            }
+        }
+        int n = assignable.size();
+        conceptIds = new String[n];
+        conceptFacet = new String[n];
+        conceptFacetProps = new FacetProperties[n][];
+        conceptReview = new boolean[n];
+        LabelTrie.Builder tb = LabelTrie.builder();
+        int compiled = 0;
+        for (int i = 0; i < n; i++) {
+            Concept c = assignable.get(i);
+            conceptIds[i] = c.id();
+            List<Concept> facets = vocabulary.facetsOf(c.id());
+            conceptFacet[i] = facets.isEmpty() ? null : facets.get(0).id();
+            conceptFacetProps[i] = new FacetProperties[facets.size()];
+            for (int k = 0; k < facets.size(); k++) {
+                FacetProperties p = facets.get(k).facet();
+                conceptFacetProps[i][k] = p;
+                conceptReview[i] |= p.regulatedClaim();
+            }
+            for (ConceptLabel l : c.labels()) {
+                int[] path = labelPath(compileSegmenter, c.id(), l);
+                if (path != null) {
+                    tb.add(path, (i << 2) | l.kind().ordinal());
+                    compiled++;
+                }
+            }
+        }
+
+        // number facets: their labels are cues in running text and keys in spec tables
+        List<NumberFacet> nfs = new ArrayList<>();
+        SpecKeyMatcher keys = new SpecKeyMatcher();
+        Map<Dimension, Integer> byDim = new EnumMap<>(Dimension.class);
+        for (Concept f : vocabulary.facets()) {
+            if (f.facet().valueKind() != ValueKind.NUMBER) {
+                continue;
+            }
+            int idx = nfs.size();
+            Dimension dim = null;
+            String unit = f.facet().unit();
+            if (unit != null) {
+                dim = Units.dimensionOf(unit).orElse(null);
+                if (dim == null) {
+                    notes.add("facet " + f.id() + " has unit \"" + unit + "\", which Sheaf cannot convert to; only values "
+                            + "written in exactly that unit are read (known units: kg, g, lb, oz, m, cm, mm, in, L, mL, ...)");
+                }
+            }
+            nfs.add(new NumberFacet(f.id(), f.facet(), dim));
+            if (dim != null) {
+                byDim.merge(dim, idx, (a, b) -> -1);
+            }
+            for (ConceptLabel l : f.labels()) {
+                int[] path = labelPath(compileSegmenter, f.id(), l);
+                if (path != null) {
+                    tb.add(path, -(idx + 1));
+                    compiled++;
+                }
+                int prev = keys.add(l.text(), idx);
+                if (prev >= 0) {
+                    notes.add("spec key \"" + l.text() + "\" is a label of both " + nfs.get(prev).id + " and " + f.id()
+                            + "; spec rows with it go to " + nfs.get(prev).id);
+                }
+            }
+        }
+        byDim.values().removeIf(v -> v < 0);
+        this.numberFacets = nfs.toArray(new NumberFacet[0]);
+        this.specKeyFacet = keys;
+        this.dimensionFacet = Collections.unmodifiableMap(byDim);
+        this.trie = tb.build();
+        this.labelsCompiled = compiled;
+        this.workers = ThreadLocal.withInitial(Worker::new);
+    }
+
+    /** A labeler with the default options. */
+    public static Labeler of(Vocabulary vocabulary, Analysis analysis) {
+        return new Labeler(vocabulary, analysis, LabelOptions.defaults());
+    }
+
+    public static Labeler of(Vocabulary vocabulary, Analysis analysis, LabelOptions options) {
+        return new Labeler(vocabulary, analysis, options);
+    }
+
+    /**
+     * The profile labels and listings are tokenized with for matching: the miner's profile with
+     * stop words and negation words kept as plain tokens (see the class description).
+     */
+    static AnalysisProfile labelingProfile(AnalysisProfile p) {
+        return p.toBuilder().name(p.name() + "+labeling").stopWords(Set.of()).negationWords(Set.of()).build();
+    }
+
+    public Vocabulary vocabulary() {
+        return vocabulary;
+    }
+
+    /** The miner's analysis this labeler was built from. */
+    public Analysis analysis() {
+        return analysis;
+    }
+
+    public LabelOptions options() {
+        return options;
+    }
+
+    /** Labels compiled into the matcher (concept labels and number-facet labels). */
+    public int labelsCompiled() {
+        return labelsCompiled;
+    }
+
+    /** Notes from compiling: labels that can never match, ambiguous spec keys, units Sheaf cannot convert. */
+    public List<String> notes() {
+        return Collections.unmodifiableList(notes);
+    }
+
+    /** Labels one listing. Safe to call from several threads at once. */
+    public Assignments label(Listing listing) {
+        return workers.get().label(Objects.requireNonNull(listing, "listing"));
+    }
+
+    private static int wordId(Segmenter s, String word, String what) {
+        int[] id = {-1};
+        int[] count = {0};
+        s.analyze(0, SegmentPart.TEXT, word, (f, p, ids, st, en, len) -> {
+            count[0] += len;
+            id[0] = ids[0];
+        });
+        if (count[0] != 1) {
+            throw new IllegalArgumentException(what + " \"" + word + "\" must be exactly one token under the analysis profile, "
+                    + "but it is " + count[0] + "; list single words");
+        }
+        return id[0];
+    }
+
+    /** The token ids of a label, or null (with a note) when it can never match. */
+    private int[] labelPath(Segmenter s, String conceptId, ConceptLabel l) {
+        List<int[]> segments = new ArrayList<>(1);
+        s.analyze(0, SegmentPart.TEXT, l.text(), (f, p, ids, st, en, len) -> segments.add(java.util.Arrays.copyOf(ids, len)));
+        if (segments.isEmpty()) {
+            notes.add("label \"" + l.text() + "\" of " + conceptId + " has no words under the analysis profile; it can never match");
+            return null;
+        }
+        if (segments.size() > 1) {
+            notes.add("label \"" + l.text() + "\" of " + conceptId + " holds a break character (one of \""
+                    + analysis.profile().breakCharacters().replace("\n", "").replace("\r", "")
+                    + "\"), and no match crosses one; it can never match — remove the character from the label");
+            return null;
+        }
+        return segments.get(0);
+    }
+
+    private boolean applies(int concept, String category) {
+        FacetProperties[] ps = conceptFacetProps[concept];
+        if (ps.length == 0) {
+            return true;
+        }
+        for (FacetProperties p : ps) {
+            if (p.appliesTo(category)) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /** A number facet as the labeler needs it. */
+    private static final class NumberFacet {
+        final String id;
+        final FacetProperties props;
+        final Dimension dimension;
+
+        NumberFacet(String id, FacetProperties props, Dimension dimension) {
+            this.id = id;
+            this.props = props;
+            this.dimension = dimension;
+        }
+    }
+
+    /** What a spec value says about the concept its key names. */
+    private enum KeyState { POSITIVE, NEGATIVE, UNKNOWN }
+
+    /** One thread's buffers and the per-listing scratch state. */
+    private final class Worker implements dev.sheaf.miner.text.SegmentSink {
+        private final Segmenter segmenter = tokens.newSegmenter();
+        private final LabelMatches matches = new LabelMatches();
+        private final NumberReader numbers = new NumberReader();
+        private boolean[] matched = new boolean[64];
+
+        private Listing listing;
+        private Field field;
+        private KeyState keyState;
+        private String keyCue;
+
+        Assignments label(Listing l) {
+            listing = l;
+            matches.clear();
+            numbers.clear();
+            List<Field> fields = l.fields();
+            for (int fi = 0; fi < fields.size(); fi++) {
+                Field f = fields.get(fi);
+                field = f;
+                if (f.kind() == FieldKind.SPEC) {
+                    valueState(f.text());
+                    segmenter.analyze(fi, SegmentPart.SPEC_KEY, f.key(), this);
+                    segmenter.analyze(fi, SegmentPart.SPEC_VALUE, f.text(), this);
+                    int nf = numberFacets.length == 0 ? -1 : specKeyFacet.facetOf(f.key());
+                    if (nf >= 0) {
+                        numbers.spec(nf, fi, f);
+                    } else {
+                        numbers.text(fi, f, SegmentPart.SPEC_VALUE, f.text(), false);
+                    }
+                } else {
+                    segmenter.analyze(fi, SegmentPart.TEXT, f.text(), this);
+                    numbers.text(fi, f, SegmentPart.TEXT, f.text(), true);
+                }
+            }
+            List<Assignment> out = matches.assignments(l);
+            numbers.assignments(l, out);
+            out.sort(ASSIGNMENT_ORDER);
+            Assignments result = new Assignments(l.id(), l.category(), l.source(), l.locator(), out, numbers.invalid());
+            listing = null;
+            field = null;
+            return result;
+        }
+
+        private void valueState(String value) {
+            String v = value.strip().toLowerCase(Locale.ROOT);
+            while (!v.isEmpty() && ".!;,".indexOf(v.charAt(v.length() - 1)) >= 0) {
+                v = v.substring(0, v.length() - 1).strip();
+            }
+            keyCue = null;
+            if (v.isEmpty() || v.equals("-") || v.equals("n/a") || v.equals("na") || v.equals("?") || v.equals("\u2014")
+                    || v.equals("\u2013") || v.equals("unknown")) {
+                keyState = KeyState.UNKNOWN;
+                return;
+            }
+            String first = v.split("[\\s,;/]+", 2)[0];
+            if (negationWords.contains(first) || v.equals("false") || v.equals("n") || v.equals("0")
+                    || v.equals("\u2717") || v.equals("\u2718")) {
+                keyState = KeyState.NEGATIVE;
+                keyCue = value.strip();
+                return;
+            }
+            keyState = KeyState.POSITIVE;
+        }
+
+        @Override
+        public void segment(int fi, SegmentPart part, int[] ids, int[] starts, int[] ends, int n) {
+            String text = part == SegmentPart.SPEC_KEY ? field.key() : field.text();
+            if (matched.length < n) {
+                matched = new boolean[Math.max(n, matched.length * 2)];
+            }
+            java.util.Arrays.fill(matched, 0, n, false);
+            int i = 0;
+            while (i < n) {
+                long r = trie.longest(ids, i, n);
+                if (r < 0) {
+                    i++;
+                    continue;
+                }
+                int end = (int) (r >>> 32);
+                int[] entries = trie.entries((int) r);
+                int startChar = starts[i];
+                int endChar = ends[end - 1];
+                if (entries[entries.length - 1] >= 0) {
+                    Polarity pol;
+                    String cue;
+                    boolean skip = false;
+                    if (part == SegmentPart.SPEC_KEY) {
+                        skip = keyState == KeyState.UNKNOWN;
+                        pol = keyState == KeyState.NEGATIVE ? Polarity.NEGATED : Polarity.STATED;
+                        cue = pol == Polarity.NEGATED ? keyCue : null;
+                    } else {
+                        cue = options.negation() ? negationCue(text, ids, starts, ends, n, i, end) : null;
+                        pol = cue == null ? Polarity.STATED : Polarity.NEGATED;
+                    }
+                    if (!skip) {
+                        for (int e : entries) {
+                            if (e >= 0) {
+                                matches.add(e >>> 2, LabelKind.values()[e & 3], fi, field, part, startChar, endChar,
+                                        text.substring(startChar, endChar), pol, cue);
+                            }
+                        }
+                    }
+                }
+                for (int e : entries) {
+                    if (e < 0) {
+                        numbers.cue(-e - 1, fi, part, endChar);
+                    }
+                }
+                for (int k = i; k < end; k++) {
+                    matched[k] = true;
+                }
+                i = end;
+            }
+        }
+
+        /** The words that negate the match at tokens [i, end), or null when it is stated. */
+        private String negationCue(String text, int[] ids, int[] starts, int[] ends, int n, int i, int end) {
+            if (options.affixNegation()) {
+                if (i > 0 && ids[i - 1] == nonId && !matched[i - 1] && joined(text, ends[i - 1], starts[i], true)) {
+                    return text.substring(starts[i - 1], starts[i]);
+                }
+                if (end < n && ids[end] == freeId && joined(text, ends[end - 1], starts[end], true)) {
+                    return text.substring(ends[end - 1], ends[end]);
+                }
+                if (end < n && ids[end] == lessId && joined(text, ends[end - 1], starts[end], false)) {
+                    return text.substring(ends[end - 1], ends[end]);
+                }
+            }
+            int stop = Math.max(0, i - 1 - options.negationWindow());
+            for (int k = i - 1; k >= stop; k--) {
+                if (matched[k]) {
+                    continue;
+                }
+                int t = ids[k];
+                if (breakerIds.contains(t)) {
+                    return null;
+                }
+                if (negationIds.contains(t)) {
+                    if (k + 1 < n && hyphen(text, ends[k], starts[k + 1])) {
+                        continue; // "no-see-um", "no-iron": a compound word, not a negation of what follows
+                    }
+                    if (k + 1 < i && exceptionIds.contains(ids[k + 1])) {
+                        return null; // "not only waterproof"
+                    }
+                    return text.substring(starts[k], ends[k]);
+                }
+                if (t == freeId && k + 1 < i && (ids[k + 1] == ofId || ids[k + 1] == fromId)) {
+                    return text.substring(starts[k], ends[k + 1]); // "free of PFCs"
+                }
+            }
+            return null;
+        }
+    }
+
+    /** Text between two tokens is a hyphen (or, when {@code spaceToo}, only white space). */
+    private static boolean joined(String text, int from, int to, boolean spaceToo) {
+        if (hyphen(text, from, to)) {
+            return true;
+        }
+        if (!spaceToo || to <= from) {
+            return false;
+        }
+        for (int k = from; k < to; k++) {
+            if (!Character.isWhitespace(text.charAt(k)) && !Character.isSpaceChar(text.charAt(k))) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private static boolean hyphen(String text, int from, int to) {
+        if (to - from != 1) {
+            return false;
+        }
+        char c = text.charAt(from);
+        return c == '-' || c == '\u2010' || c == '\u2011';
+    }
+
+    private static final java.util.Comparator<Assignment> ASSIGNMENT_ORDER = java.util.Comparator
+            .comparing(Assignment::conceptId)
+            .thenComparing(a -> a.value() == null ? Double.NEGATIVE_INFINITY : a.value());
+
+    /** The concept occurrences of one listing, grouped into assignments. */
+    private final class LabelMatches {
+        private final List<Occurrence> list = new ArrayList<>();
+
+        void clear() {
+            list.clear();
+        }
+
+        void add(int concept, LabelKind kind, int fi, Field f, SegmentPart part, int start, int end, String text,
+                 Polarity pol, String cue) {
+            list.add(new Occurrence(concept, new Evidence(fi, f.kind(), f.key(), part, start, end, text, kind, pol, cue)));
+        }
+
+        List<Assignment> assignments(Listing l) {
+            List<Assignment> out = new ArrayList<>();
+            if (list.isEmpty()) {
+                return out;
+            }
+            list.sort(OCCURRENCE_ORDER);
+            int i = 0;
+            while (i < list.size()) {
+                int c = list.get(i).concept;
+                int j = i;
+                List<Evidence> ev = new ArrayList<>();
+                boolean stated = false;
+                while (j < list.size() && list.get(j).concept == c) {
+                    Evidence e = list.get(j).evidence;
+                    ev.add(e);
+                    stated |= e.polarity() == Polarity.STATED;
+                    j++;
+                }
+                out.add(Assignment.term(conceptIds[c], conceptFacet[c], stated ? Polarity.STATED : Polarity.NEGATED, ev,
+                        applies(c, l.category()), conceptReview[c]));
+                i = j;
+            }
+            return out;
+        }
+    }
+
+    private record Occurrence(int concept, Evidence evidence) {
+    }
+
+    private static final java.util.Comparator<Occurrence> OCCURRENCE_ORDER = java.util.Comparator
+            .comparingInt(Occurrence::concept)
+            .thenComparingInt(o -> o.evidence().field())
+            .thenComparingInt(o -> o.evidence().part().ordinal())
+            .thenComparingInt(o -> o.evidence().start());
+
+    /** Numbers of one listing: spec values of number facets and cued quantities in text. */
+    private final class NumberReader {
+        private final List<int[]> cues = new ArrayList<>(); // facet, field, part, end char
+        private final List<NumberValue> values = new ArrayList<>();
+        private final List<InvalidValue> invalid = new ArrayList<>();
+
+        void clear() {
+            cues.clear();
+            values.clear();
+            invalid.clear();
+        }
+
+        List<InvalidValue> invalid() {
+            return new ArrayList<>(invalid);
+        }
+
+        void cue(int facet, int fi, SegmentPart part, int endChar) {
+            cues.add(new int[] {facet, fi, part.ordinal(), endChar});
+        }
+
+        /** A spec row whose key is a number facet's label. */
+        void spec(int nf, int fi, Field f) {
+            NumberFacet facet = numberFacets[nf];
+            String value = f.text();
+            if (value.isBlank()) {
+                return;
+            }
+            java.util.Optional<dev.sheaf.miner.text.Quantity> q = dev.sheaf.miner.text.Quantities.parse(f.key(), value);
+            if (q.isPresent()) {
+                dev.sheaf.miner.text.Quantity x = q.get();
+                if (facet.dimension != null && x.dimension() != facet.dimension) {
+                    invalid.add(new InvalidValue(facet.id, fi, f.key(), value, "expected a " + word(facet.dimension)
+                            + " in " + facet.props.unit() + ", found a " + word(x.dimension()) + " (\"" + x.surface() + "\")"));
+                    return;
+                }
+                add(nf, x.value(), x.valueMax(), x.unit(), new Evidence(fi, f.kind(), f.key(), SegmentPart.SPEC_VALUE,
+                        x.start(), x.end(), x.surface(), null, Polarity.STATED, null), fi, f, value);
+                return;
+            }
+            String unit = SpecKeyForms.unitSuffix(f.key());
+            if (unit == null && facet.dimension == null) {
+                unit = facet.props.unit();
+            }
+            String plain = value.strip();
+            if (PLAIN_NUMBER.matcher(plain).matches() && (unit != null || facet.props.unit() == null)) {
+                int start = value.indexOf(plain);
+                double v = Double.parseDouble(plain.replace(",", ""));
+                add(nf, v, v, unit, new Evidence(fi, f.kind(), f.key(), SegmentPart.SPEC_VALUE, start, start + plain.length(),
+                        plain, null, Polarity.STATED, null), fi, f, value);
+                return;
+            }
+            invalid.add(new InvalidValue(facet.id, fi, f.key(), value, "expected "
+                    + (facet.props.unit() == null ? "a number" : "a number with a unit, such as \"1.2 " + facet.props.unit() + "\"")
+                    + ", found \"" + value.strip() + "\""));
+        }
+
+        /**
+         * Quantities in running text, or in a spec value whose key names no number facet; there the
+         * key says what the number is ("Packed weight: 3 kg" is not the weight), so only a facet label
+         * inside the value links it, never the dimension alone.
+         */
+        void text(int fi, Field f, SegmentPart part, String text, boolean byDimension) {
+            if (numberFacets.length == 0 || !hasDigit(text)) {
+                return;
+            }
+            for (dev.sheaf.miner.text.Quantity q : dev.sheaf.miner.text.Quantities.find(text)) {
+                int nf = cuedFacet(fi, part, text, q);
+                if (nf < 0 && byDimension && options.quantityByDimension()) {
+                    Integer only = dimensionFacet.get(q.dimension());
+                    nf = only == null ? -1 : only;
+                }
+                if (nf < 0) {
+                    continue;
+                }
+                add(nf, q.value(), q.valueMax(), q.unit(), new Evidence(fi, f.kind(), f.key(), part, q.start(), q.end(),
+                        q.surface(), null, Polarity.STATED, null), fi, f, null);
+            }
+        }
+
+        private int cuedFacet(int fi, SegmentPart part, String text, dev.sheaf.miner.text.Quantity q) {
+            for (int k = cues.size() - 1; k >= 0; k--) {
+                int[] c = cues.get(k);
+                if (c[1] != fi || c[2] != part.ordinal() || c[3] > q.start()) {
+                    continue;
+                }
+                if (!closeBefore(text, c[3], q.start())) {
+                    return -1;
+                }
+                NumberFacet facet = numberFacets[c[0]];
+                if (facet.dimension == null || facet.dimension == q.dimension()) {
+                    return c[0];
+                }
+            }
+            return -1;
+        }
+
+        /** At most quantityWindow words and no sentence end between a cue and a quantity. */
+        private boolean closeBefore(String text, int from, int to) {
+            int words = 0;
+            boolean inWord = false;
+            for (int k = from; k < to; k++) {
+                char ch = text.charAt(k);
+                if (Character.isLetterOrDigit(ch)) {
+                    if (!inWord) {
+                        words++;
+                        inWord = true;
+                    }
+                } else {
+                    inWord = false;
+                    if (ch == '!' || ch == '?' || ch == ';' || ch == '\n' || ch == '\r'
+                            || ch == '.' && !(k > from && k + 1 < to && Character.isDigit(text.charAt(k - 1))
+                            && Character.isDigit(text.charAt(k + 1)))) {
+                        if (ch != '.' || !abbreviationDot(text, from, k)) {
+                            return false;
+                        }
+                    }
+                }
+            }
+            return words <= options.quantityWindow();
+        }
+
+        private void add(int nf, double value, double valueMax, String unit, Evidence ev, int fi, Field f, String specValue) {
+            NumberFacet facet = numberFacets[nf];
+            double v = value;
+            double vmax = valueMax;
+            String u = unit;
+            String target = facet.props.unit();
+            if (target != null && u != null && !u.equalsIgnoreCase(target)) {
+                if (facet.dimension == null) {
+                    if (specValue != null) {
+                        invalid.add(new InvalidValue(facet.id, fi, f.key(), specValue, "facet " + facet.id + " is in \"" + target
+                                + "\", which Sheaf cannot convert to, and the value is in " + u));
+                    }
+                    return;
+                }
+                v = Units.convert(value, u, target);
+                vmax = Units.convert(valueMax, u, target);
+                u = target;
+            } else if (target != null) {
+                u = target;
+            }
+            for (NumberValue nv : values) {
+                if (nv.facet == nf && same(nv.value, v) && same(nv.valueMax, vmax)) {
+                    nv.evidence.add(ev);
+                    return;
+                }
+            }
+            values.add(new NumberValue(nf, v, vmax, u, ev));
+        }
+
+        private boolean same(double a, double b) {
+            double scale = Math.max(Math.abs(a), Math.abs(b));
+            return a == b || Math.abs(a - b) <= options.sameValueTolerance() * scale;
+        }
+
+        void assignments(Listing l, List<Assignment> out) {
+            for (NumberValue nv : values) {
+                NumberFacet facet = numberFacets[nv.facet];
+                double mid = (nv.value + nv.valueMax) / 2;
+                String bucket = facet.props.bucketFor(mid).map(dev.sheaf.vocab.Bucket::label).orElse(null);
+                nv.evidence.sort(java.util.Comparator.comparingInt(Evidence::field).thenComparingInt(e -> e.part().ordinal())
+                        .thenComparingInt(Evidence::start));
+                out.add(new Assignment(facet.id, facet.id, Polarity.STATED, nv.evidence, nv.value, nv.valueMax, nv.unit, bucket,
+                        facet.props.appliesTo(l.category()), facet.props.regulatedClaim()));
+            }
+        }
+    }
+
+    private static boolean abbreviationDot(String text, int from, int dot) {
+        // "approx. 1.2 kg", "ca. 40 L": a dot right after a short lower-case word is an abbreviation, not a sentence end
+        int k = dot - 1;
+        while (k >= from && Character.isLetter(text.charAt(k))) {
+            k--;
+        }
+        String w = text.substring(k + 1, dot).toLowerCase(Locale.ROOT);
+        return w.equals("approx") || w.equals("ca") || w.equals("appr") || w.equals("est");
+    }
+
+    private static boolean hasDigit(String s) {
+        for (int i = 0; i < s.length(); i++) {
+            char c = s.charAt(i);
+            if (c >= '0' && c <= '9' || c >= '\u00bc' && c <= '\u00be' || c >= '\u2150' && c <= '\u215e') {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    private static String word(Dimension d) {
+        return d.name().toLowerCase(Locale.ROOT).replace('_', ' ');
+    }
+
+    private static final java.util.regex.Pattern PLAIN_NUMBER = java.util.regex.Pattern.compile("[0-9]{1,3}(,[0-9]{3})+(\\.[0-9]+)?|[0-9]+(\\.[0-9]+)?");
+
+    private static final class NumberValue {
+        final int facet;
+        final double value;
+        final double valueMax;
+        final String unit;
+        final List<Evidence> evidence = new ArrayList<>(2);
+
+        NumberValue(int facet, double value, double valueMax, String unit, Evidence first) {
+            this.facet = facet;
+            this.value = value;
+            this.valueMax = valueMax;
+            this.unit = unit;
+            evidence.add(first);
+        }
+    }
+
+    /** Ids of every concept the labeler can assign, in vocabulary order (values and yes/no facets). */
+    public List<String> assignableConcepts() {
+        return List.of(conceptIds);
+    }
+
+    /** Ids of the number facets. */
+    public List<String> numberFacets() {
+        List<String> out = new ArrayList<>();
+        for (NumberFacet f : numberFacets) {
+            out.add(f.id);
+        }
+        return out;
+    }
+
+}

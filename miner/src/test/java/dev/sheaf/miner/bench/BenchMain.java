@@ -1,0 +1,113 @@
+package dev.sheaf.miner.bench;
+
+import dev.sheaf.miner.ingest.Listing;
+import dev.sheaf.miner.mine.Harvest;
+import dev.sheaf.miner.mine.HarvestFiles;
+import dev.sheaf.miner.mine.HarvestOptions;
+import dev.sheaf.miner.mine.Harvester;
+import dev.sheaf.miner.text.Analysis;
+import dev.sheaf.miner.text.AnalysisProfile;
+import dev.sheaf.miner.text.Segmenter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.ArrayBlockingQueue;
+import java.util.concurrent.atomic.AtomicLong;
+
+/**
+ * Benchmark driver (test scope, used by bench/mine-benchmark.sh until ingest is merged):
+ * {@code mine FILE.jsonl OUTDIR [threads]} — the whole harvest, written like sheaf mine writes it;
+ * {@code analysis-only FILE.jsonl [threads]} — the same reading and the same Lucene analysis over
+ * the same threads, with no counting: the floor that mining is measured against.
+ */
+public final class BenchMain {
+    private BenchMain() {
+    }
+
+    public static void main(String[] args) throws Exception {
+        String mode = args[0];
+        Path file = Path.of(args[1]);
+        long t0 = System.nanoTime();
+        if (mode.equals("mine")) {
+            Path out = Path.of(args[2]);
+            int threads = args.length > 3 ? Integer.parseInt(args[3]) : Runtime.getRuntime().availableProcessors();
+            long[] phaseStart = {System.nanoTime()};
+            String[] phase = {"analysing"};
+            Harvester h = Harvester.builder().options(HarvestOptions.defaults()).threads(threads)
+                    .sources(List.of(file.getFileName().toString()))
+                    .progress(name -> {
+                        long now = System.nanoTime();
+                        System.err.printf("  %-18s %6.2f s%n", phase[0], (now - phaseStart[0]) / 1e9);
+                        phase[0] = name;
+                        phaseStart[0] = now;
+                    }).build();
+            Harvest harvest;
+            try (Harvester.Run run = h.start()) {
+                JsonlListings.read(file, file.getFileName().toString(), run, System.err::println);
+                harvest = run.finish();
+            }
+            Files.createDirectories(out);
+            HarvestFiles.write(harvest, out);
+            System.err.printf("  %-18s %6.2f s%n", phase[0], (System.nanoTime() - phaseStart[0]) / 1e9);
+            System.err.printf("mine: %d listings, %d tokens, %d candidates in %.2f s%n", harvest.corpus().listings(),
+                    harvest.corpus().tokens(), harvest.candidates().size(), (System.nanoTime() - t0) / 1e9);
+        } else if (mode.equals("analysis-only")) {
+            int threads = args.length > 2 ? Integer.parseInt(args[2]) : Runtime.getRuntime().availableProcessors();
+            long tokens = analysisOnly(file, threads);
+            System.err.printf("analysis-only: %d tokens in %.2f s%n", tokens, (System.nanoTime() - t0) / 1e9);
+        } else {
+            throw new IllegalArgumentException("mode must be mine or analysis-only");
+        }
+    }
+
+    private static long analysisOnly(Path file, int threads) throws Exception {
+        Analysis analysis = Analysis.of(AnalysisProfile.defaults());
+        ArrayBlockingQueue<List<Listing>> queue = new ArrayBlockingQueue<>(threads * 4);
+        List<Listing> poison = new ArrayList<>();
+        AtomicLong tokens = new AtomicLong();
+        List<Thread> workers = new ArrayList<>();
+        for (int w = 0; w < threads; w++) {
+            Thread t = new Thread(() -> {
+                Segmenter seg = analysis.newSegmenter();
+                long[] n = {0};
+                try {
+                    while (true) {
+                        List<Listing> b = queue.take();
+                        if (b == poison) {
+                            break;
+                        }
+                        for (Listing l : b) {
+                            seg.analyze(l, (field, part, ids, starts, ends, length) -> n[0] += length);
+                        }
+                    }
+                } catch (InterruptedException e) {
+                    Thread.currentThread().interrupt();
+                }
+                tokens.addAndGet(n[0]);
+            });
+            t.start();
+            workers.add(t);
+        }
+        List<Listing>[] batch = new List[] {new ArrayList<>(256)};
+        JsonlListings.read(file, file.getFileName().toString(), l -> {
+            batch[0].add(l);
+            if (batch[0].size() == 256) {
+                try {
+                    queue.put(batch[0]);
+                } catch (InterruptedException e) {
+                    throw new IllegalStateException(e);
+                }
+                batch[0] = new ArrayList<>(256);
+            }
+        }, System.err::println);
+        queue.put(batch[0]);
+        for (int w = 0; w < threads; w++) {
+            queue.put(poison);
+        }
+        for (Thread t : workers) {
+            t.join();
+        }
+        return tokens.get();
+    }
+}
