@@ -96,10 +96,10 @@ public final class EditHistory {
         String d = edit.describe(current);
         long s = seq + 1;
         Step step = new Step(s, s, Action.DO, d, Instant.now(), a.forward(), a.backward());
-        commit(step, a.after());
+        Vocabulary before = commit(step, a.after());
         undo.push(new Entry(s, d, a.forward(), a.backward()));
         redo.clear();
-        notify(step, a.after());
+        notify(step, before, a.after());
         return current;
     }
 
@@ -136,9 +136,9 @@ public final class EditHistory {
         Entry e = undo.peek();
         Vocabulary after = current.with(e.backward());
         Step step = new Step(seq + 1, e.ref(), Action.UNDO, e.description(), Instant.now(), e.backward(), e.forward());
-        commit(step, after);
+        Vocabulary was = commit(step, after);
         redo.push(undo.pop());
-        notify(step, after);
+        notify(step, was, after);
         return current;
     }
 
@@ -150,9 +150,9 @@ public final class EditHistory {
         Entry e = redo.peek();
         Vocabulary after = current.with(e.forward());
         Step step = new Step(seq + 1, e.ref(), Action.REDO, e.description(), Instant.now(), e.forward(), e.backward());
-        commit(step, after);
+        Vocabulary was = commit(step, after);
         undo.push(redo.pop());
-        notify(step, after);
+        notify(step, was, after);
         return current;
     }
 
@@ -217,9 +217,8 @@ public final class EditHistory {
         }
     }
 
-    private Vocabulary pendingBefore;
-
-    private void commit(Step step, Vocabulary after) {
+    /** Records the step, then makes {@code after} current; returns the snapshot it replaced. */
+    private Vocabulary commit(Step step, Vocabulary after) {
         if (recorder != null) {
             try {
                 recorder.record(step);
@@ -228,13 +227,10 @@ public final class EditHistory {
                         + "\" to the edit journal, so it was not applied: " + e.getMessage(), e);
             }
         }
-        pendingBefore = current;
+        Vocabulary before = current;
         current = after;
         seq = step.seq();
-    }
-
-    private void notify(Step step, Vocabulary after) {
-        notify(step, pendingBefore, after);
+        return before;
     }
 
     private void notify(Step step, Vocabulary before, Vocabulary after) {

@@ -300,6 +300,16 @@ class VocabularyCheckerTest {
     }
 
     @Test
+    void anUnreadableFileIsOneErrorWithItsPosition() {
+        CheckReport r = VocabularyChecker.unreadable(new VocabularyFormatException("shop.vocab.json", 12, 7, "concepts[3]",
+                "expected a list [ ... ], found a text", null));
+        assertTrue(r.hasErrors());
+        assertEquals(Rule.UNREADABLE, r.findings().get(0).rule());
+        assertTrue(r.findings().get(0).message().startsWith("shop.vocab.json:12:7: at concepts[3]: expected a list"));
+        assertFalse(VocabularyChecker.check(CLEAN).of(Rule.UNREADABLE).size() > 0);
+    }
+
+    @Test
     void rendersTextAndJsonWithRuleStandardAndHint() throws Exception {
         Vocabulary v = with(edit("two-way-zipper").altLabel("zip").build());
         CheckReport r = VocabularyChecker.check(v);

@@ -213,7 +213,7 @@ final class ConsistencyCommand implements Callable<Integer> {
                             ? GroundingScales.read(ws.dir().resolve(GroundingScales.WORKSPACE_FILE)) : null,
                     example(vocabulary));
             if (assignments != null) {
-                GroundingAssignments a = GroundingAssignments.read(assignments, display(ws, assignments));
+                GroundingAssignments a = GroundingAssignments.read(assignments, display(ws, assignments), vocabulary);
                 catalog = a.catalog();
                 for (GroundingAssignments.Line l : a.problems()) {
                     err.println("sheaf consistency: " + l.source() + ":" + l.line() + ": " + l.reason());

@@ -12,13 +12,15 @@ import java.util.Objects;
  * @param isFacet        true for a facet (a top concept)
  * @param labels         every label that may match it (preferred, alternative, hidden), as written
  * @param regulatedClaim true when its facet is a regulated or safety claim that needs compliance review
+ * @param broader        ids of its broader concepts (a listing carrying it also carries them)
  */
 public record FeedbackConcept(String id, String label, String facetId, boolean isFacet, List<String> labels,
-                              boolean regulatedClaim) {
+                              boolean regulatedClaim, List<String> broader) {
     public FeedbackConcept {
         Objects.requireNonNull(id, "id");
         Objects.requireNonNull(label, "label");
         labels = List.copyOf(labels);
+        broader = List.copyOf(broader);
         if (id.isBlank()) {
             throw new IllegalArgumentException("a concept id must not be blank");
         }
@@ -27,5 +29,11 @@ public record FeedbackConcept(String id, String label, String facetId, boolean i
                 throw new IllegalArgumentException("concept " + id + " has a blank label; leave it out");
             }
         }
+    }
+
+    /** A concept with no broader concepts. */
+    public FeedbackConcept(String id, String label, String facetId, boolean isFacet, List<String> labels,
+                           boolean regulatedClaim) {
+        this(id, label, facetId, isFacet, labels, regulatedClaim, List.of());
     }
 }

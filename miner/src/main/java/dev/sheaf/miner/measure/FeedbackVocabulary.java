@@ -106,6 +106,26 @@ public final class FeedbackVocabulary {
         return out;
     }
 
+    /** Every concept above {@code id} through broader links (not {@code id} itself unless in a cycle), in id order. */
+    public Set<String> ancestors(String id) {
+        Set<String> out = new TreeSet<>();
+        java.util.Deque<String> todo = new java.util.ArrayDeque<>();
+        FeedbackConcept c = concepts.get(id);
+        if (c != null) {
+            todo.addAll(c.broader());
+        }
+        while (!todo.isEmpty()) {
+            String x = todo.pop();
+            if (out.add(x)) {
+                FeedbackConcept b = concepts.get(x);
+                if (b != null) {
+                    todo.addAll(b.broader());
+                }
+            }
+        }
+        return out;
+    }
+
     /** Every one-word label in normal form (the words {@link ComparativeMorphology} must not take apart). */
     public Set<String> singleWordLabels() {
         Set<String> out = new TreeSet<>();

@@ -88,8 +88,10 @@ public final class FeedbackVocabularyFile {
             }
             TreeSet<String> above = facetsAbove(e.getKey(), concepts, facets.keySet());
             boolean claim = above.stream().anyMatch(regulated::contains);
+            List<String> broader = new ArrayList<>();
+            e.getValue().path("broader").forEach(b -> broader.add(b.asText()));
             out.add(new FeedbackConcept(e.getKey(), display(e.getValue(), language, e.getKey()),
-                    above.isEmpty() ? null : above.first(), false, labels(e.getValue()), claim));
+                    above.isEmpty() ? null : above.first(), false, labels(e.getValue()), claim, broader));
         }
         return FeedbackVocabulary.of(out);
     }

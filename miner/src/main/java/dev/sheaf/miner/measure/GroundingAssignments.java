@@ -19,16 +19,21 @@ import java.util.Set;
  * Catalog facts for grounding, read from the labeling stage's {@code assignments.jsonl}: one JSON
  * object per line and listing,
  * <pre>{@code
- * {"listingId": "FH-000123", "category": "sleeping-bags",
- *  "assignments": [
- *    {"conceptId": "hood", "facetId": "hood", "polarity": "stated", ...},
- *    {"conceptId": "pit-zips", "polarity": "negated", ...},
- *    {"conceptId": "temperature-rating", "polarity": "stated", "value": -5.0, "valueMax": -5.0, "unit": "°C"}]}
+ * {"id": "FH-000123", "category": "sleeping-bags", ...,
+ *  "concepts": [
+ *    {"concept": "hood", "facet": "hood", "polarity": "stated", ...},
+ *    {"concept": "pit-zips", "facet": "features", "polarity": "negated", ...},
+ *    {"concept": "temperature-rating", "facet": "temperature-rating", "polarity": "stated",
+ *     "value": -5.0, "valueMax": -5.0, "unit": "°C", ...}]}
  * }</pre>
- * (the member names of the labeler's {@code Assignments} and {@code Assignment} records). A stated
- * concept is carried; a concept with only negated occurrences is lacked; a number is the facet's
- * value (a range: its midpoint). Members not named here are ignored. A line that cannot be read is a
- * {@link Line problem} with its line number and is skipped; reading goes on.
+ * A stated concept is carried, and so are the concepts above it in the vocabulary (a listing with
+ * a helmet-compatible hood has a hood); a concept with only negated occurrences is lacked; a number
+ * is the facet's value in the facet's unit (a range: its midpoint). Members not named here are
+ * ignored. A line that cannot be read is a {@link Line problem} with its line number and is
+ * skipped; reading goes on.
+ *
+ * <p>Bridges the time until the labeling stage's own reader ({@code AssignmentsJsonl.read}, which
+ * also resolves ids merged away) is on this stage's class path.
  *
  * @param catalog  the facts
  * @param listings listings read
@@ -47,8 +52,13 @@ public record GroundingAssignments(GroundingCatalog catalog, int listings, List<
 
     private static final ObjectMapper MAPPER = new ObjectMapper();
 
-    /** Reads {@code file} (UTF-8 JSON Lines); problems name it {@code displayName}. */
+    /** Reads {@code file} (UTF-8 JSON Lines) with no hierarchy; problems name it {@code displayName}. */
     public static GroundingAssignments read(Path file, String displayName) throws IOException {
+        return read(file, displayName, FeedbackVocabulary.empty());
+    }
+
+    /** Reads {@code file}; a stated concept also carries its ancestors in {@code vocabulary}. */
+    public static GroundingAssignments read(Path file, String displayName, FeedbackVocabulary vocabulary) throws IOException {
         List<GroundingListing> listings = new ArrayList<>();
         List<Line> problems = new ArrayList<>();
         Set<String> seen = new HashSet<>();
@@ -61,7 +71,7 @@ public record GroundingAssignments(GroundingCatalog catalog, int listings, List<
                     continue;
                 }
                 try {
-                    GroundingListing l = listing(MAPPER.readTree(text));
+                    GroundingListing l = listing(MAPPER.readTree(text), vocabulary);
                     if (!seen.add(l.id())) {
                         problems.add(new Line(displayName, no, "listing " + l.id() + " appears again; the first line is kept"));
                         continue;
@@ -77,26 +87,26 @@ public record GroundingAssignments(GroundingCatalog catalog, int listings, List<
         return new GroundingAssignments(GroundingCatalog.of(listings), listings.size(), problems);
     }
 
-    private static GroundingListing listing(JsonNode n) {
+    private static GroundingListing listing(JsonNode n, FeedbackVocabulary vocabulary) {
         if (n == null || !n.isObject()) {
             throw new IllegalArgumentException("expected one JSON object per line");
         }
-        String id = text(n, "listingId", "listing", "id");
+        String id = text(n, "id");
         if (id == null) {
-            throw new IllegalArgumentException("expected \"listingId\": the listing's id; found none");
+            throw new IllegalArgumentException("expected \"id\": the listing's id; found none");
         }
         String category = text(n, "category");
         Set<String> stated = new HashSet<>();
         Set<String> negated = new HashSet<>();
         Map<String, Double> numbers = new HashMap<>();
-        JsonNode list = n.get("assignments");
+        JsonNode list = n.get("concepts");
         if (list != null && !list.isArray()) {
-            throw new IllegalArgumentException("listing " + id + ": expected \"assignments\": [ ... ]");
+            throw new IllegalArgumentException("listing " + id + ": expected \"concepts\": [ ... ]");
         }
         for (JsonNode a : list == null ? List.<JsonNode>of() : list) {
-            String concept = text(a, "conceptId", "concept");
+            String concept = text(a, "concept");
             if (concept == null) {
-                throw new IllegalArgumentException("listing " + id + ": an assignment has no \"conceptId\"");
+                throw new IllegalArgumentException("listing " + id + ": an entry of \"concepts\" has no \"concept\"");
             }
             JsonNode value = a.get("value");
             if (value != null && value.isNumber()) {
@@ -111,6 +121,9 @@ public record GroundingAssignments(GroundingCatalog catalog, int listings, List<
             } else {
                 stated.add(concept);
             }
+        }
+        for (String c : List.copyOf(stated)) {
+            stated.addAll(vocabulary.ancestors(c));
         }
         negated.removeAll(stated);
         return new GroundingListing(id, category, stated, negated, numbers);

@@ -35,16 +35,30 @@ public final class Analysis {
     /** Type of an emoji token, as Lucene's standard tokenizer names it; a boundary for the miner. */
     public static final String TYPE_EMOJI = StandardTokenizer.TOKEN_TYPES[StandardTokenizer.EMOJI];
 
+    /** Term flags the segmenter reads from its term cache. */
+    static final int STOP = 1;
+    static final int NEGATION = 2;
+    static final int UNIT = 4;
+    static final int NUMBER = 8;
+
     private final AnalysisProfile profile;
     private final Analyzer analyzer;
-    private final TermDictionary terms = new TermDictionary();
+    private final Analyzer miningAnalyzer;
+    private final TermDictionary terms;
     private final boolean[] asciiBreaks = new boolean[128];
     private final String otherBreaks;
     private final ThreadLocal<Segmenter> segmenters;
 
     private Analysis(AnalysisProfile profile) {
         this.profile = profile;
-        this.analyzer = new ProfileAnalyzer(profile);
+        this.analyzer = new ProfileAnalyzer(profile, true);
+        this.miningAnalyzer = new ProfileAnalyzer(profile, false);
+        org.apache.lucene.analysis.CharArraySet stops = profile.stopSet();
+        org.apache.lucene.analysis.CharArraySet negations = profile.negationSet();
+        org.apache.lucene.analysis.CharArraySet units = profile.unitSet();
+        this.terms = new TermDictionary(t -> (stops.contains(t) ? STOP : 0) | (negations.contains(t) ? NEGATION : 0)
+                | (units.contains(t) ? UNIT : 0)
+                | (UnitSplitFilter.numberPrefix(t.toCharArray(), t.length()) == t.length() ? NUMBER : 0));
         StringBuilder other = new StringBuilder();
         for (char c : profile.breakCharacters().toCharArray()) {
             if (c < 128) {
@@ -69,6 +83,14 @@ public final class Analysis {
     /** The Lucene analyzer of this profile (thread-safe; reuses token streams per thread). */
     public Analyzer analyzer() {
         return analyzer;
+    }
+
+    /**
+     * The chain without the stop filter: the segmenter applies stop words, negations and the
+     * unit-after-number rule itself from term flags, with exactly the analyzer's semantics.
+     */
+    Analyzer miningAnalyzer() {
+        return miningAnalyzer;
     }
 
     /** The term ids every segmenter of this analysis hands out. */
@@ -113,12 +135,14 @@ public final class Analysis {
     /** The Lucene chain of a profile. */
     private static final class ProfileAnalyzer extends Analyzer {
         private final AnalysisProfile p;
+        private final boolean stopFilter;
         private final org.apache.lucene.analysis.CharArraySet stops;
         private final org.apache.lucene.analysis.CharArraySet negations;
         private final org.apache.lucene.analysis.CharArraySet units;
 
-        ProfileAnalyzer(AnalysisProfile p) {
+        ProfileAnalyzer(AnalysisProfile p, boolean stopFilter) {
             this.p = p;
+            this.stopFilter = stopFilter;
             this.stops = p.stopSet();
             this.negations = p.negationSet();
             this.units = p.unitSet();
@@ -138,7 +162,9 @@ public final class Analysis {
             if (p.numbers() == AnalysisProfile.Numbers.SPLIT_UNITS) {
                 ts = new UnitSplitFilter(ts, units);
             }
-            ts = new MarkingStopFilter(ts, stops, negations);
+            if (stopFilter) {
+                ts = new MarkingStopFilter(ts, stops, negations);
+            }
             return new TokenStreamComponents(src, ts);
         }
 

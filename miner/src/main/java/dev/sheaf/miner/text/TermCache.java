@@ -14,6 +14,9 @@ final class TermCache {
     private int[] offsets = new int[1 << 11];
     private int[] lengths = new int[1 << 11];
     private int[] ids = new int[1 << 11];
+    private int[] flags = new int[1 << 11];
+    /** The flags of the term of the last {@link #id} call. */
+    int lastFlags;
     private char[] pool = new char[1 << 15];
     private int poolSize;
     private int size;
@@ -31,6 +34,7 @@ final class TermCache {
                 return insert(i, h, buf, len);
             }
             if (hashes[e] == h && lengths[e] == len && same(offsets[e], buf, len)) {
+                lastFlags = flags[e];
                 return ids[e];
             }
             i = (i + 1) & mask;
@@ -48,13 +52,16 @@ final class TermCache {
     }
 
     private int insert(int slot, int h, char[] buf, int len) {
-        int id = dictionary.intern(buf, len);
+        long packed = dictionary.intern(buf, len);
+        int id = (int) packed;
+        int f = (int) (packed >>> 32);
         if (size == ids.length) {
             int n = size * 2;
             hashes = Arrays.copyOf(hashes, n);
             offsets = Arrays.copyOf(offsets, n);
             lengths = Arrays.copyOf(lengths, n);
             ids = Arrays.copyOf(ids, n);
+            flags = Arrays.copyOf(flags, n);
         }
         if (poolSize + len > pool.length) {
             pool = Arrays.copyOf(pool, Math.max(pool.length * 2, poolSize + len));
@@ -64,6 +71,8 @@ final class TermCache {
         offsets[size] = poolSize;
         lengths[size] = len;
         ids[size] = id;
+        flags[size] = f;
+        lastFlags = f;
         poolSize += len;
         slots[slot] = ++size;
         if (size * 2 > slots.length) {

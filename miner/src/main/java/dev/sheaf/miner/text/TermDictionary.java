@@ -12,20 +12,25 @@ import java.util.List;
 public final class TermDictionary {
     private final Object2IntOpenHashMap<String> ids = new Object2IntOpenHashMap<>();
     private final List<String> terms = new ArrayList<>();
+    private final it.unimi.dsi.fastutil.ints.IntArrayList flags = new it.unimi.dsi.fastutil.ints.IntArrayList();
+    private final java.util.function.ToIntFunction<String> flagger;
 
-    TermDictionary() {
+    TermDictionary(java.util.function.ToIntFunction<String> flagger) {
+        this.flagger = flagger;
         ids.defaultReturnValue(-1);
     }
 
-    synchronized int intern(char[] buf, int len) {
+    /** The id and the profile flags of a term: {@code flags << 32 | id}. */
+    synchronized long intern(char[] buf, int len) {
         String s = new String(buf, 0, len);
         int id = ids.getInt(s);
         if (id < 0) {
             id = terms.size();
             ids.put(s, id);
             terms.add(s);
+            flags.add(flagger.applyAsInt(s));
         }
-        return id;
+        return ((long) flags.getInt(id) << 32) | id;
     }
 
     /** The id of an analysed term, or -1 when it never occurred. */

@@ -33,6 +33,7 @@ class ConsistencyInputFilesTest {
         FeedbackVocabulary v = FeedbackVocabularyFile.read(fixture("tiny.vocab.json"));
         FeedbackConcept hood = v.concept("hood").orElseThrow();
         assertEquals(List.of("hood", "hooded", "hodd"), hood.labels(), "preferred, alternative, hidden");
+        assertEquals(java.util.Set.of("hood", "features"), v.ancestors("helmet-hood"));
         assertEquals("features", hood.facetId());
         assertEquals("features", v.concept("helmet-hood").orElseThrow().facetId(), "found through broader links");
         assertTrue(v.concept("weight").orElseThrow().isFacet());
@@ -56,10 +57,15 @@ class ConsistencyInputFilesTest {
 
     @Test
     void readsAssignmentsIntoCatalogFactsAndSkipsABrokenLine() throws IOException {
-        GroundingAssignments a = GroundingAssignments.read(fixture("assignments.jsonl"), "assignments.jsonl");
+        FeedbackVocabulary v = FeedbackVocabularyFile.read(fixture("tiny.vocab.json"));
+        GroundingAssignments a = GroundingAssignments.read(fixture("assignments.jsonl"), "assignments.jsonl", v);
         assertEquals(4, a.listings());
         GroundingListing t1 = a.catalog().listing("T1").orElseThrow();
-        assertTrue(t1.carries("hood"));
+        assertTrue(t1.carries("helmet-hood"));
+        assertTrue(t1.carries("hood"), "a helmet-compatible hood is a hood");
+        assertTrue(t1.carries("features"));
+        assertTrue(GroundingAssignments.read(fixture("assignments.jsonl"), "a").catalog().listing("T1").orElseThrow()
+                .stated().equals(java.util.Set.of("helmet-hood")), "no vocabulary, no hierarchy");
         assertEquals(900.0, t1.number("weight"));
         assertEquals("rain-shells", t1.category());
         GroundingListing r1 = a.catalog().listing("R1").orElseThrow();

@@ -60,7 +60,7 @@ final class JsonCodec {
     static final String FORMAT = "sheaf-vocabulary";
     static final int VERSION = 1;
 
-    private static final JsonNodeFactory NODES = JsonNodeFactory.withExactBigDecimals(false);
+    private static final JsonNodeFactory NODES = JsonNodeFactory.instance;
 
     static final ObjectMapper READER = JsonMapper.builder()
             .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION)
@@ -546,22 +546,16 @@ final class JsonCodec {
     static Patch readPatch(JsonNode n) throws IOException {
         SchemeInfo scheme = n.hasNonNull("scheme") ? READER.treeToValue(n.get("scheme"), SchemeJson.class).toScheme() : null;
         TreeMap<String, Optional<Concept>> cs = new TreeMap<>();
-        var ci = n.path("concepts").fields();
-        while (ci.hasNext()) {
-            var e = ci.next();
+        for (Map.Entry<String, JsonNode> e : n.path("concepts").properties()) {
             cs.put(e.getKey(), e.getValue().isNull() ? Optional.empty() : Optional.of(readConcept(e.getValue())));
         }
         TreeMap<String, Optional<Retired>> rs = new TreeMap<>();
-        var ri = n.path("retired").fields();
-        while (ri.hasNext()) {
-            var e = ri.next();
+        for (Map.Entry<String, JsonNode> e : n.path("retired").properties()) {
             rs.put(e.getKey(), e.getValue().isNull() ? Optional.empty()
                     : Optional.of(READER.treeToValue(e.getValue(), RetiredJson.class).toRetired()));
         }
         TreeMap<String, Optional<Decision>> ds = new TreeMap<>();
-        var di = n.path("decisions").fields();
-        while (di.hasNext()) {
-            var e = di.next();
+        for (Map.Entry<String, JsonNode> e : n.path("decisions").properties()) {
             ds.put(e.getKey(), e.getValue().isNull() ? Optional.empty()
                     : Optional.of(READER.treeToValue(e.getValue(), DecisionJson.class).toDecision()));
         }

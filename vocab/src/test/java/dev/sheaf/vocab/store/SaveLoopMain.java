@@ -25,13 +25,13 @@ public final class SaveLoopMain {
                 break;
             case "hold":
                 try (VocabularyStore s = VocabularyStore.open(file)) {
-                    out.println("open");
+                    out.println("open " + s.current().size());
                     Thread.sleep(60_000);
                 }
                 break;
             default:
                 try (VocabularyStore s = VocabularyStore.open(file)) {
-                    out.println("opened");
+                    out.println("opened " + s.current().size());
                 } catch (VocabularyLockedException e) {
                     out.println("refused: " + e.getMessage());
                 }
