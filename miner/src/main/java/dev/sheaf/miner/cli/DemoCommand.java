@@ -2,6 +2,7 @@ package dev.sheaf.miner.cli;
 
 import dev.sheaf.miner.ingest.Ingest;
 import dev.sheaf.miner.ingest.IngestSummary;
+import dev.sheaf.miner.ingest.Listing;
 import dev.sheaf.miner.ingest.ProblemLog;
 import dev.sheaf.miner.ingest.Workspace;
 import dev.sheaf.miner.mine.Harvest;
@@ -19,6 +20,8 @@ import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
@@ -73,6 +76,7 @@ final class DemoCommand implements Callable<Integer> {
         Path harvestDir = out.resolve("harvest");
         Harvest harvest;
         IngestSummary read;
+        List<Listing> listings = new ArrayList<>();
         err.println("sheaf demo: mining " + dir + " ...");
         err.flush();
         try {
@@ -81,9 +85,11 @@ final class DemoCommand implements Callable<Integer> {
                     .threads(threads).sources(ws.sources().stream().map(s -> ws.dir().relativize(s.path()).toString()).toList())
                     .build();
             try (Harvester.Run run = h.start()) {
+                List<Listing> kept = listings;
                 read = Ingest.builder().sources(ws.sources()).workspaceRoot(ws.dir()).threads(threads).build().run(l -> {
                     synchronized (run) {
                         run.accept(l);
+                        kept.add(l);
                     }
                 });
                 harvest = run.finish();
@@ -112,7 +118,7 @@ final class DemoCommand implements Callable<Integer> {
         // 3. label, measure, report
         AuditSummary s;
         try {
-            s = AuditRun.run(ws, out.resolve("audit"), err);
+            s = AuditRun.run(ws, out.resolve("audit"), err, listings, read.problems());
         } catch (IOException | RuntimeException e) {
             err.println("sheaf demo: the audit failed: " + e.getMessage());
             return ExitCodes.FAILURE;

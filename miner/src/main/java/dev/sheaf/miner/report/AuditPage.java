@@ -108,7 +108,8 @@ final class AuditPage {
             }
             List<String> reasons = new ArrayList<>();
             for (Flag x : f.flags()) {
-                reasons.add(x.kind().label() + ": " + x.explanation());
+                reasons.add(x.kind().label() + ": " + reportFlag(x).map(ReportFlag::statement)
+                        .orElse("a regulated or safety claim; needs compliance review"));
             }
             b.attention(new AttentionItem(label(f.attribute()), f.attribute(), reasons));
             attentionLines.add(label(f.attribute()) + " — " + String.join("; ", f.flags().stream().map(x -> x.kind().label()).toList()));

@@ -1,5 +1,7 @@
 package dev.sheaf.miner.report;
 
+import dev.sheaf.miner.ingest.Listing;
+import dev.sheaf.miner.ingest.Problem;
 import dev.sheaf.miner.ingest.Workspace;
 import dev.sheaf.miner.label.Assignment;
 import dev.sheaf.miner.label.Assignments;
@@ -96,6 +98,16 @@ public final class AuditRun {
      * @throws IOException when an input cannot be read at all or an output cannot be written
      */
     public static AuditSummary run(Workspace ws, Path outDir, PrintWriter progress) throws IOException {
+        return run(ws, outDir, progress, null, List.of());
+    }
+
+    /**
+     * As {@link #run(Workspace, Path, PrintWriter)}, labelling listings already read from the workspace
+     * sources (by a harvest over the same sources) instead of reading them again; {@code listings} null
+     * reads the sources.
+     */
+    public static AuditSummary run(Workspace ws, Path outDir, PrintWriter progress, List<Listing> listings,
+                                   List<Problem> readProblems) throws IOException {
         List<String> problems = new ArrayList<>();
         Files.createDirectories(outDir);
         Vocabulary vocab = VocabularyFiles.read(ws.vocabulary()).vocabulary();
@@ -104,8 +116,16 @@ public final class AuditRun {
         // 1. label
         Path labelDir = outDir.resolve("labels");
         Labeler labeler = Labeler.of(vocab, Analysis.of(AnalysisProfile.resolve(profileOf(ws))));
-        LabelRunSummary ls = LabelRun.builder(labeler).sources(ws.sources()).workspaceRoot(ws.dir())
-                .threads(Math.max(1, Math.min(4, Runtime.getRuntime().availableProcessors()))).build().run(labelDir);
+        LabelRun.Builder lb = LabelRun.builder(labeler).sources(ws.sources()).workspaceRoot(ws.dir())
+                .threads(Math.max(1, Math.min(4, Runtime.getRuntime().availableProcessors())));
+        LabelRunSummary ls;
+        if (listings == null) {
+            ls = lb.build().run(labelDir);
+        } else {
+            List<Listing> ordered = new ArrayList<>(listings);
+            ordered.sort(Comparator.comparing(Listing::source).thenComparing(Listing::locator).thenComparing(Listing::id));
+            ls = lb.build().run(ordered, readProblems, labelDir);
+        }
         say(progress, "labelled " + ls.listings() + " listings (" + ls.withLabels() + " with at least one label)");
         if (ls.problems() > 0) {
             problems.add(ls.problems() + " input problem(s) while labelling; see " + labelDir.resolve(LabelRun.PROBLEMS_CSV));
