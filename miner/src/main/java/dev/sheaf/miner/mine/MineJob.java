@@ -251,6 +251,21 @@ final class MineJob {
 
     void close() {
         finished = true;
+        for (Thread t : workerThreads) {
+            if (t != null && t.isAlive()) {
+                t.interrupt(); // closed without finish(): the run is abandoned
+            }
+        }
+        for (Thread t : workerThreads) {
+            try {
+                if (t != null) {
+                    t.join(10_000);
+                }
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+                break;
+            }
+        }
         for (AnalysisWorker w : workers) {
             if (w != null) {
                 w.close();
