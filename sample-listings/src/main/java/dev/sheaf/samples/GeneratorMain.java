@@ -18,32 +18,35 @@ import picocli.CommandLine.Spec;
 
 /** {@code ./sheaf generate}: writes the demo catalog or large generated corpora. */
 @Command(name = "generate", mixinStandardHelpOptions = true, version = "sheaf generate 0.1.0",
-        subcommands = GeneratorMain.Demo.class,
+        subcommands = GeneratorMain.Demo.class, usageHelpAutoWidth = true,
         description = {
             "Writes invented listings of Fernhollow Outfitters, a fictional outdoor-gear shop: either the demo workspace "
                 + "(subcommand 'demo') or a benchmark corpus of any size.",
             "",
             "A corpus has the demo's phenomena at scale: eleven categories, seven suppliers with their own spellings, key "
-                + "names and units (one writes everything differently), synonyms, hyphenation variants, misspellings (1% of "
+                + "names and units (one writes everything differently), synonyms, hyphenation variants, misspellings (1%% of "
                 + "listings), marketing fluff, negations, regulated claims and a long tail of invented names.",
             "Output is deterministic: listing i depends only on the seed and i, so the same seed always gives the same bytes "
                 + "and a smaller corpus is a prefix of a larger one.",
             "",
-            "  --format jsonl   one file, one JSON object per line (about 430 bytes per listing):",
-            "                   {\"id\":\"FH-000001\",\"category\":\"tents\",\"title\":...,\"description\":...,\"bullets\":[...],\"specs\":{...}}",
-            "  --format folder  one file per listing in sub-folders of 1000 files: HTML pages (90%), .txt and .md notes,",
-            "                   PDF and DOCX sheets (1% each). The folder must be new or empty.",
+            "Formats:",
+            "  jsonl    one file, one JSON object per line, about 430 bytes per listing:",
+            "           {\"id\":\"FH-000001\",\"category\":\"tents\",\"title\":..,\"description\":..,",
+            "            \"bullets\":[..],\"specs\":{\"Weight\":\"1.2 kg\",..}}",
+            "  folder   one file per listing in sub-folders of 1000 files: HTML pages (90%%),",
+            "           .txt and .md notes (4%% each), PDF and DOCX sheets (1%% each).",
+            "           The folder must be new or empty.",
             ""},
         footer = {
             "",
             "Examples:",
             "  ./sheaf generate --listings 1000000 --format jsonl --out /tmp/fh-1m.jsonl",
-            "  ./sheaf generate --listings 20000 --format folder --out bench/corpora/fh-20k --seed 7",
+            "  ./sheaf generate --listings 20000 --format folder --out /tmp/fh-20k --seed 7",
             "  ./sheaf generate demo --out /tmp/fernhollow",
             "",
-            "Benchmark corpora belong in /tmp or bench/corpora/ (git-ignored), never in the repository.",
-            "",
-            "Exit codes: 0 done, 1 could not write the output, 2 bad arguments."})
+            "Benchmark corpora belong in /tmp or bench/corpora/ (git-ignored), never in the repository."},
+        exitCodeListHeading = "%nExit codes:%n",
+        exitCodeList = {"0:done", "1:could not write the output", "2:bad arguments"})
 public final class GeneratorMain implements Callable<Integer> {
     /** Exit codes, also listed in --help. */
     static final int OK = 0;
@@ -127,7 +130,7 @@ public final class GeneratorMain implements Callable<Integer> {
         }
     }
 
-    @Command(name = "demo", mixinStandardHelpOptions = true,
+    @Command(name = "demo", mixinStandardHelpOptions = true, usageHelpAutoWidth = true,
             description = {
                 "Re-creates the Fernhollow Outfitters demo workspace: the catalog (HTML pages, a CSV export, a JSONL feed, PDF and "
                     + "DOCX sheets, text and Markdown notes), bad/ (broken files), feedback.csv, judgments.csv, "
@@ -138,9 +141,10 @@ public final class GeneratorMain implements Callable<Integer> {
                 "",
                 "Examples:",
                 "  ./sheaf generate demo --out /tmp/fernhollow",
-                "  ./sheaf generate demo --out sample-listings --replace     (refresh the committed demo after changing the generator)",
-                "",
-                "Exit codes: 0 done, 1 could not write the output, 2 bad arguments."})
+                "  ./sheaf generate demo --out sample-listings --replace",
+                "      (refresh the committed demo after changing the generator)"},
+            exitCodeListHeading = "%nExit codes:%n",
+            exitCodeList = {"0:done", "1:could not write the output", "2:bad arguments"})
     static final class Demo implements Callable<Integer> {
         @Spec
         CommandSpec spec;
@@ -201,6 +205,16 @@ public final class GeneratorMain implements Callable<Integer> {
             cmd.getErr().println("generate: could not write the output: " + ex.getMessage());
             cmd.getErr().flush();
             return WRITE_FAILED;
+        });
+        cl.setParameterExceptionHandler((ex, args) -> {
+            // the message says what is wrong; the full help would bury it
+            PrintWriter e = ex.getCommandLine().getErr();
+            e.println("generate: " + ex.getMessage());
+            if (!ex.getMessage().contains("--help")) {
+                e.println("Run ./sheaf generate --help (or ./sheaf generate demo --help) for the options and examples.");
+            }
+            e.flush();
+            return USAGE;
         });
         cl.setCaseInsensitiveEnumValuesAllowed(true);
         return cl;

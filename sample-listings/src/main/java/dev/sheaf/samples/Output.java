@@ -20,6 +20,10 @@ final class Output {
     private Output() {
     }
 
+    private static final boolean POSIX = java.nio.file.FileSystems.getDefault().supportedFileAttributeViews().contains("posix");
+    private static final java.util.Set<java.nio.file.attribute.PosixFilePermission> READABLE =
+            java.nio.file.attribute.PosixFilePermissions.fromString("rw-r--r--");
+
     @FunctionalInterface
     interface Body {
         void write(OutputStream out) throws IOException;
@@ -34,6 +38,10 @@ final class Output {
         try {
             try (OutputStream out = new BufferedOutputStream(Files.newOutputStream(tmp), 1 << 16)) {
                 body.write(out);
+            }
+            if (POSIX) {
+                // temp files are created owner-only; generated data is meant to be read by everyone
+                Files.setPosixFilePermissions(tmp, READABLE);
             }
             try {
                 Files.move(tmp, abs, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);

@@ -54,7 +54,7 @@ final class PackCopy {
             }
         } else {
             if (kids) {
-                d.say("A " + l + " L daypack sized for kids aged 6 to 12.", Trait.VOLUME_L, Trait.KIDS);
+                d.say("This " + l + " L daypack is sized for kids aged 6 to 12.", Trait.VOLUME_L, Trait.KIDS);
                 d.say("The chest strap has a child-safe breakaway buckle, and reflective details help drivers see small walkers.", Trait.CHILD_SAFETY);
             } else {
                 switch (r.nextInt(3)) {
@@ -105,7 +105,8 @@ final class PackCopy {
         if (twoWay) {
             d.bullet(Copy.cap(v.twoWayZipper()) + " on the main compartment", Trait.TWO_WAY_ZIP);
         }
-        d.bullet(r.pick("Trekking pole loops", "Ice axe loop", "Stretch front pocket", "Lid pocket with key clip", "Side compression straps"));
+        d.bullet(kids ? r.pick("Stretch front pocket", "Name label inside", "Reflective details")
+                : r.pick("Trekking pole loops", "Ice axe loop", "Stretch front pocket", "Lid pocket with key clip", "Side compression straps"));
         if (hydration && r.chance(0.5)) {
             d.bullet("Hydration compatible");
         }

@@ -26,7 +26,7 @@ final class Readme {
         b.append("## What is here\n\n| path | what | count |\n|---|---|---|\n");
         JsonNode bf = cat.get("byFormat");
         row(b, "catalog/html/<category>/*.html", "product pages: title, meta description, headings, bullets; specs as a `<table>` of th/td rows, a `<dl>`, or \"Key: value\" lines; site navigation and footer boilerplate", bf.get("html").asInt());
-        row(b, "catalog/feeds/catalog-export.csv", "the shop's catalog export: `sku,name,category,description,feature_1..3`, then one column per spec (RFC 4180, CRLF; every tenth description has a blank line inside its quoted cell; negative numbers use U+2212)", bf.get("csv").asInt());
+        row(b, "catalog/feeds/catalog-export.csv", "the shop's catalog export: `sku,name,category,description,feature_1..3`, then one column per spec (RFC 4180, CRLF; every tenth description has a blank line inside its quoted cell; negative numbers use U+2212). Its column names are fixed, but the values are as the suppliers wrote them: `Volume (L)` may hold `45`, `45 L` or `2,750 cu in`", bf.get("csv").asInt());
         row(b, "catalog/feeds/partner-feed.jsonl", "a partner feed, one listing per line: `id, category, title, description, bullets[], specs{}`", bf.get("jsonl").asInt());
         row(b, "catalog/pdf/<category>/*.pdf", "supplier spec sheets (one page; specs as two columns without a colon)", bf.get("pdf").asInt());
         row(b, "catalog/docx/<category>/*.docx", "supplier product sheets (Word; specs in a table)", bf.get("docx").asInt());

@@ -24,6 +24,7 @@ import org.junit.jupiter.api.io.TempDir;
 
 class ScaleCorpusTest {
     private static final ScaleCorpus.Progress QUIET = (n, b) -> { };
+    private static final java.util.regex.Pattern NON_LETTERS = java.util.regex.Pattern.compile("[^\\p{L}]+");
 
     @TempDir
     Path tmp;
@@ -75,19 +76,22 @@ class ScaleCorpusTest {
         Set<String> categories = new HashSet<>();
         Map<String, Integer> words = new HashMap<>();
         int typos = 0;
+        List<java.util.regex.Pattern> typoForms = Typos.ALL.stream().map(t -> CatalogText.word(t.wrong())).collect(Collectors.toList());
         for (int i = 0; i < lines.size(); i++) {
             JsonNode n = m.readTree(lines.get(i));
             assertEquals(ProductFactory.id(i + 1), n.get("id").asText());
             titles.add(n.get("title").asText());
             categories.add(n.get("category").asText());
             String body = n.get("title").asText() + " " + n.get("description").asText();
-            for (String w : body.toLowerCase(java.util.Locale.ROOT).split("[^\\p{L}]+")) {
+            for (String w : NON_LETTERS.split(body.toLowerCase(java.util.Locale.ROOT))) {
                 if (!w.isEmpty()) {
                     words.merge(w, 1, Integer::sum);
                 }
             }
-            for (Typos.Typo t : Typos.ALL) {
-                if (CatalogText.holds(lines.get(i), t.wrong())) {
+            String lower = lines.get(i).toLowerCase(java.util.Locale.ROOT);
+            for (int k = 0; k < Typos.ALL.size(); k++) {
+                // cheap prefilter before the whole-word check
+                if (lower.contains(Typos.ALL.get(k).wrong()) && typoForms.get(k).matcher(lines.get(i)).find()) {
                     typos++;
                 }
             }
@@ -102,18 +106,18 @@ class ScaleCorpusTest {
     @Test
     void folderCorpusHoldsMostlyHtmlInSubFoldersOfAtMost1000Files() throws IOException {
         Path dir = tmp.resolve("corpus");
-        ScaleCorpus.folder(1500, 42, dir, QUIET);
+        ScaleCorpus.folder(1100, 42, dir, QUIET);
         Map<String, Long> perFolder;
         List<Path> files;
         try (Stream<Path> s = Files.walk(dir)) {
             files = s.filter(Files::isRegularFile).collect(Collectors.toList());
         }
-        assertEquals(1500, files.size());
+        assertEquals(1100, files.size());
         perFolder = files.stream().collect(Collectors.groupingBy(p -> p.getParent().getFileName().toString(), Collectors.counting()));
         assertEquals(Set.of("0000", "0001"), perFolder.keySet());
         perFolder.values().forEach(c -> assertTrue(c <= ScaleCorpus.FILES_PER_FOLDER));
         Map<String, Long> kinds = files.stream().collect(Collectors.groupingBy(p -> p.toString().substring(p.toString().lastIndexOf('.') + 1), Collectors.counting()));
-        assertTrue(kinds.get("html") > 1200, kinds.toString());
+        assertTrue(kinds.get("html") > 900, kinds.toString());
         assertTrue(kinds.keySet().containsAll(Set.of("txt", "md", "pdf", "docx")), kinds.toString());
         Path pdf = files.stream().filter(p -> p.toString().endsWith(".pdf")).findFirst().orElseThrow();
         assertTrue(CatalogText.textOf(pdf).contains("Specifications"));

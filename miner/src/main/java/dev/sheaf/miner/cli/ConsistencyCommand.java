@@ -1,6 +1,18 @@
 package dev.sheaf.miner.cli;
 
 import dev.sheaf.miner.ingest.Workspace;
+import dev.sheaf.miner.label.AssignmentsJsonl;
+import dev.sheaf.miner.label.Labeler;
+import dev.sheaf.miner.measure.CoverageFacet;
+import dev.sheaf.miner.measure.CoverageOptions;
+import dev.sheaf.miner.measure.CoverageReport;
+import dev.sheaf.miner.measure.FlagFill;
+import dev.sheaf.miner.measure.FlagOverlap;
+import dev.sheaf.miner.measure.OverlapPair;
+import dev.sheaf.miner.text.Analysis;
+import dev.sheaf.miner.text.AnalysisProfile;
+import dev.sheaf.vocab.Vocabulary;
+import dev.sheaf.vocab.store.VocabularyStore;
 import dev.sheaf.miner.measure.AgreementAnalysis;
 import dev.sheaf.miner.measure.AgreementOptions;
 import dev.sheaf.miner.measure.AgreementReport;
@@ -16,7 +28,6 @@ import dev.sheaf.miner.measure.FeedbackCsv;
 import dev.sheaf.miner.measure.FeedbackSentences;
 import dev.sheaf.miner.measure.FeedbackTermFinder;
 import dev.sheaf.miner.measure.FeedbackVocabulary;
-import dev.sheaf.miner.measure.FeedbackVocabularyFile;
 import dev.sheaf.miner.measure.FlagInputs;
 import dev.sheaf.miner.measure.FlagKind;
 import dev.sheaf.miner.measure.FlagReport;
@@ -38,10 +49,12 @@ import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Comparator;
+import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Set;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -98,8 +111,9 @@ final class ConsistencyCommand implements Callable<Integer> {
     Path vocabFile;
 
     @Option(names = "--assignments", paramLabel = "FILE",
-            description = "The labeler's assignments.jsonl, to ground mentions in the catalog. Default: "
-                    + "OUTPUT/label/assignments.jsonl in the workspace when it exists; without it nothing is grounded.")
+            description = "The labeler's assignments.jsonl (from 'sheaf label'), to ground mentions in the catalog and to "
+                    + "flag thin and overlapping attributes. Default: OUTPUT/labels/assignments.jsonl in the workspace when "
+                    + "it exists; without it nothing is grounded.")
     Path assignmentsFile;
 
     @Option(names = "--workspace", paramLabel = "DIR",
@@ -165,13 +179,13 @@ final class ConsistencyCommand implements Callable<Integer> {
             }
         }
         Path feedback = feedbackFile != null ? feedbackFile : ws == null ? null : ws.feedback();
-        Path vocab = vocabFile != null ? vocabFile : ws == null ? null : ws.vocabulary();
+        Path vocabPath = vocabFile != null ? vocabFile : ws == null ? null : ws.vocabulary();
         if (feedback == null) {
             err.println("sheaf consistency: expected a feedback file or --workspace DIR whose workspace.json names "
                     + "\"feedback\"; found neither. Try 'sheaf consistency --help'.");
             return ExitCodes.USAGE;
         }
-        if (vocab == null) {
+        if (vocabPath == null) {
             err.println("sheaf consistency: expected --vocab FILE (or a workspace naming \"vocabulary\"); the vocabulary "
                     + "says which words are attributes. Try 'sheaf consistency --help'.");
             return ExitCodes.USAGE;
@@ -179,8 +193,9 @@ final class ConsistencyCommand implements Callable<Integer> {
         Path outDir = out != null ? out : ws != null ? ws.output().resolve("consistency") : Path.of("out", "consistency");
         Path judgments = judgmentsFile != null ? judgmentsFile : ws == null ? null : ws.judgments();
         Path assignments = assignmentsFile;
-        if (assignments == null && ws != null && Files.isRegularFile(ws.output().resolve("label").resolve("assignments.jsonl"))) {
-            assignments = ws.output().resolve("label").resolve("assignments.jsonl");
+        if (assignments == null && ws != null
+                && Files.isRegularFile(ws.output().resolve("labels").resolve(AssignmentsJsonl.FILE_NAME))) {
+            assignments = ws.output().resolve("labels").resolve(AssignmentsJsonl.FILE_NAME);
         }
         Path key = keyFile != null ? keyFile
                 : (ws != null ? ws.dir() : parentOf(feedback)).resolve(".sheaf").resolve("pseudonym.key");
@@ -198,14 +213,21 @@ final class ConsistencyCommand implements Callable<Integer> {
 
         boolean problems = false;
         FeedbackSentences sentences;
+        Vocabulary vocab;
         FeedbackVocabulary vocabulary;
+        AnalysisProfile profile;
         GroundingScales scales;
         GroundingCatalog catalog = null;
+        List<FlagFill> fill = new ArrayList<>();
+        List<FlagOverlap> overlaps = new ArrayList<>();
         AgreementReport agreement = null;
         Pseudonyms pseudonyms;
         try {
             sentences = FeedbackCsv.read(feedback, columns, display(ws, feedback));
-            vocabulary = FeedbackVocabularyFile.read(vocab);
+            vocab = VocabularyStore.read(vocabPath);
+            vocabulary = FeedbackVocabulary.from(vocab);
+            profile = ws == null ? AnalysisProfile.defaults() : ws.profileFile().isPresent()
+                    ? AnalysisProfile.load(ws.profileFile().get()) : AnalysisProfile.preset(ws.profile());
             scales = GroundingScales.first(
                     // the vocabulary's own scales go first here once the vocabulary format carries them
                     scalesFile == null ? null : GroundingScales.read(scalesFile),
@@ -213,14 +235,26 @@ final class ConsistencyCommand implements Callable<Integer> {
                             ? GroundingScales.read(ws.dir().resolve(GroundingScales.WORKSPACE_FILE)) : null,
                     example(vocabulary));
             if (assignments != null) {
-                GroundingAssignments a = GroundingAssignments.read(assignments, display(ws, assignments), vocabulary);
+                Set<String> named = new HashSet<>();
+                sentences.sentences().forEach(x -> {
+                    named.add(x.targetId());
+                    named.add(x.referenceId());
+                });
+                GroundingAssignments a = GroundingAssignments.read(assignments, vocab, named);
                 catalog = a.catalog();
-                for (GroundingAssignments.Line l : a.problems()) {
-                    err.println("sheaf consistency: " + l.source() + ":" + l.line() + ": " + l.reason());
+                CoverageReport coverage = CoverageReport.read(assignments, vocab, CoverageOptions.defaults());
+                for (CoverageFacet f : coverage.facets()) {
+                    fill.add(new FlagFill(f.facetId(), f.overall().applicable(), f.overall().filled(), List.of()));
+                }
+                for (OverlapPair o : coverage.overlaps()) {
+                    overlaps.add(new FlagOverlap(o.a(), o.b(), o.jaccard(), o.both(), List.of()));
+                }
+                for (String pr : a.problems()) {
+                    err.println("sheaf consistency: " + display(ws, assignments) + ": " + pr);
                 }
                 problems |= !a.problems().isEmpty();
-                err.printf(Locale.ROOT, "sheaf consistency: catalog facts for %d listings from %s%n", a.listings(),
-                        display(ws, assignments));
+                err.printf(Locale.ROOT, "sheaf consistency: catalog facts for %d of the %d listings in %s%n", a.kept(),
+                        a.listings(), display(ws, assignments));
             }
             boolean newKey = !Files.exists(key);
             pseudonyms = Pseudonyms.fromKeyFile(key);
@@ -237,16 +271,22 @@ final class ConsistencyCommand implements Callable<Integer> {
                     problems = true;
                 }
             }
+        } catch (IllegalArgumentException e) {
+            err.println("sheaf consistency: " + e.getMessage());
+            return ExitCodes.USAGE;
         } catch (IOException e) {
             err.println("sheaf consistency: cannot read " + describe(e));
             return ExitCodes.FAILURE;
         }
 
-        ConsistencyOptions options = ConsistencyOptions.builder(FeedbackTermFinder.exactLabels(vocabulary))
-                .vocabulary(vocabulary).scales(scales).catalog(catalog).pseudonyms(pseudonyms).build();
+        Labeler labeler = Labeler.of(vocab, Analysis.of(profile));
+        Set<String> stopWords = new java.util.TreeSet<>(profile.stopWords());
+        stopWords.addAll(ConsistencyOptions.FEEDBACK_FRAME_WORDS);
+        ConsistencyOptions options = ConsistencyOptions.builder(FeedbackTermFinder.labeler(labeler))
+                .vocabulary(vocabulary).scales(scales).catalog(catalog).pseudonyms(pseudonyms).stopWords(stopWords).build();
         ConsistencyReport report = ConsistencyAnalysis.run(sentences, options);
         FlagReport flags = dev.sheaf.miner.measure.Flags.evaluate(FlagInputs.builder().consistency(report)
-                .agreement(agreement).vocabulary(vocabulary).build(), flagThresholds);
+                .agreement(agreement).vocabulary(vocabulary).fill(fill).overlaps(overlaps).build(), flagThresholds);
         printTable(report, flags, stdout);
         try {
             ConsistencyFiles.write(report, flags, outDir);

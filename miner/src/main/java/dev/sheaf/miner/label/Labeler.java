@@ -305,19 +305,19 @@ public final class Labeler {
         private Field field;
         private KeyState keyState;
         private String keyCue;
+        private int keyStateField;
 
         Assignments label(Listing l) {
             listing = l;
+            keyStateField = -1;
             matches.clear();
             numbers.clear();
+            // one token stream for the whole listing; segments arrive per field and part, in order
+            segmenter.analyze(l, this);
             List<Field> fields = l.fields();
             for (int fi = 0; fi < fields.size(); fi++) {
                 Field f = fields.get(fi);
-                field = f;
                 if (f.kind() == FieldKind.SPEC) {
-                    valueState(f.text());
-                    segmenter.analyze(fi, SegmentPart.SPEC_KEY, f.key(), this);
-                    segmenter.analyze(fi, SegmentPart.SPEC_VALUE, f.text(), this);
                     int nf = numberFacets.length == 0 ? -1 : specKeyFacet.facetOf(f.key());
                     if (nf >= 0) {
                         numbers.spec(nf, fi, f);
@@ -325,7 +325,6 @@ public final class Labeler {
                         numbers.text(fi, f, SegmentPart.SPEC_VALUE, f.text(), false);
                     }
                 } else {
-                    segmenter.analyze(fi, SegmentPart.TEXT, f.text(), this);
                     numbers.text(fi, f, SegmentPart.TEXT, f.text(), true);
                 }
             }
@@ -361,6 +360,11 @@ public final class Labeler {
 
         @Override
         public void segment(int fi, SegmentPart part, int[] ids, int[] starts, int[] ends, int n) {
+            field = listing.fields().get(fi);
+            if (part == SegmentPart.SPEC_KEY && keyStateField != fi) {
+                valueState(field.text());
+                keyStateField = fi;
+            }
             String text = part == SegmentPart.SPEC_KEY ? field.key() : field.text();
             if (matched.length < n) {
                 matched = new boolean[Math.max(n, matched.length * 2)];

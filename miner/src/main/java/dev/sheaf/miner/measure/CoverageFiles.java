@@ -247,6 +247,8 @@ public final class CoverageFiles {
         }
         ArrayNode problems = o.putArray("problems");
         r.problems().forEach(problems::add);
+        ArrayNode notes = o.putArray("notes");
+        r.notes().forEach(notes::add);
         return o;
     }
 

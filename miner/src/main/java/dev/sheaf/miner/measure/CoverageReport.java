@@ -74,9 +74,10 @@ public final class CoverageReport {
     private final List<CoverageCurvePoint> curve;
     private final List<CoverageGapTerm> gapTerms;
     private final List<String> problems;
+    private final List<String> notes;
     private final long resolved;
 
-    private CoverageReport(Accumulator a, List<CoverageGapTerm> gaps, List<String> problems, long resolved) {
+    private CoverageReport(Accumulator a, List<CoverageGapTerm> gaps, List<String> problems, List<String> notes, long resolved) {
         this.options = a.options;
         this.listings = a.n;
         this.withNothing = a.nothing;
@@ -96,6 +97,7 @@ public final class CoverageReport {
         List<CoverageGapTerm> g = new ArrayList<>(gaps);
         this.gapTerms = List.copyOf(g.subList(0, Math.min(g.size(), a.options.gapTerms())));
         this.problems = List.copyOf(problems);
+        this.notes = List.copyOf(notes);
         this.resolved = resolved;
     }
 
@@ -106,13 +108,14 @@ public final class CoverageReport {
         List<String> problems = new ArrayList<>(s.problems());
         Path gaps = assignments.resolveSibling("gap-terms.csv");
         List<CoverageGapTerm> terms = List.of();
+        List<String> notes = new ArrayList<>();
         if (Files.isRegularFile(gaps)) {
             terms = readGapTerms(gaps, problems);
         } else {
-            problems.add("no gap-terms.csv beside " + assignments.getFileName() + "; the terms of unlabeled listings are not reported "
+            notes.add("no gap-terms.csv beside " + assignments.getFileName() + "; the terms of unlabeled listings are not reported "
                     + "(run sheaf label again to write it)");
         }
-        return new CoverageReport(acc, terms, problems, s.resolved());
+        return new CoverageReport(acc, terms, problems, notes, s.resolved());
     }
 
     /** The report over assignments in hand. */
@@ -121,7 +124,7 @@ public final class CoverageReport {
         for (Assignments a : assignments) {
             acc.add(a);
         }
-        return new CoverageReport(acc, gaps, List.of(), 0);
+        return new CoverageReport(acc, gaps, List.of(), List.of(), 0);
     }
 
     static List<CoverageGapTerm> readGapTerms(Path file, List<String> problems) throws IOException {
@@ -211,6 +214,11 @@ public final class CoverageReport {
     /** Lines of the input left out, ids no longer in the vocabulary, missing side files. */
     public List<String> problems() {
         return problems;
+    }
+
+    /** Remarks that are not input problems (a side file that is missing). */
+    public List<String> notes() {
+        return notes;
     }
 
     /** Assignments whose concept id was resolved through "replaced by". */

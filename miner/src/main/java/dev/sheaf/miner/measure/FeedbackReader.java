@@ -37,7 +37,10 @@ final class FeedbackReader {
     private final GroundingCatalog catalog;
     private final ComparativeMorphology morphology;
     private final MentionCues cues;
+    /** Words seen per run are few (feedback repeats itself); both caches stop growing at {@value #CACHE}. */
+    private static final int CACHE = 200_000;
     private final Map<String, List<String>> baseHits = new ConcurrentHashMap<>();
+    private final Map<String, List<String>> bases = new ConcurrentHashMap<>();
 
     FeedbackReader(ConsistencyOptions options) {
         this.finder = options.finder();
@@ -159,7 +162,13 @@ final class FeedbackReader {
     /** The word as a degree form of a label: "roomier" when "roomy" is a label. */
     private Span degreeForm(CueTokens.Token t) {
         for (String base : bases(t.norm())) {
-            List<String> concepts = baseHits.computeIfAbsent(base, this::wholeLabel);
+            List<String> concepts = baseHits.get(base);
+            if (concepts == null) {
+                concepts = wholeLabel(base);
+                if (baseHits.size() < CACHE) {
+                    baseHits.put(base, concepts);
+                }
+            }
             if (!concepts.isEmpty()) {
                 Span sp = new Span(t.start(), t.end(), FeedbackMention.VIA_DEGREE_FORM);
                 for (String c : concepts) {
@@ -191,6 +200,18 @@ final class FeedbackReader {
 
     /** Degree bases ("roomier" → roomy) and the -ish base, most likely first, without the word itself. */
     private List<String> bases(String word) {
+        List<String> cached = bases.get(word);
+        if (cached != null) {
+            return cached;
+        }
+        List<String> b = List.copyOf(computeBases(word));
+        if (bases.size() < CACHE) {
+            bases.put(word, b);
+        }
+        return b;
+    }
+
+    private List<String> computeBases(String word) {
         Set<String> out = new java.util.LinkedHashSet<>();
         for (DegreeReading r : morphology.readings(word)) {
             if (r.inflected()) {

@@ -1,5 +1,6 @@
 package dev.sheaf.miner.measure;
 
+import dev.sheaf.miner.label.Labeler;
 import java.util.List;
 
 /**
@@ -12,9 +13,9 @@ import java.util.List;
  * asks the finder again with its base form from {@link ComparativeMorphology} ("roomier" →
  * "roomy"), so any matcher gains comparative and superlative morphology.
  *
- * <p>Two implementations: {@link #exactLabels(FeedbackVocabulary)} (whole-token, case-insensitive
- * label match; for tests and until the labeler is wired in) and, once the labeling stage is in, a
- * wrapper over its token matcher so feedback and catalog are matched by the same rules.
+ * <p>Two implementations: {@link #labeler(Labeler)}, the labeling stage's own matcher, so feedback
+ * and catalog are matched by the same rules (what the command line uses), and
+ * {@link #exactLabels(FeedbackVocabulary)}, a plain whole-token label match for small tests.
  */
 @FunctionalInterface
 public interface FeedbackTermFinder {
@@ -30,5 +31,13 @@ public interface FeedbackTermFinder {
      */
     static FeedbackTermFinder exactLabels(FeedbackVocabulary vocabulary) {
         return new FeedbackLabelMatcher(vocabulary);
+    }
+
+    /**
+     * The labeling stage's matcher: each sentence is labeled as a one-field listing with the
+     * labeler's vocabulary, analysis profile and options; every term occurrence is a hit.
+     */
+    static FeedbackTermFinder labeler(Labeler labeler) {
+        return new FeedbackLabelerFinder(labeler);
     }
 }

@@ -12,6 +12,9 @@ import java.util.Set;
 import java.util.SortedMap;
 import java.util.TreeMap;
 import java.util.TreeSet;
+import dev.sheaf.vocab.Concept;
+import dev.sheaf.vocab.ConceptLabel;
+import dev.sheaf.vocab.Vocabulary;
 import org.apache.lucene.analysis.miscellaneous.ASCIIFoldingFilter;
 
 /**
@@ -68,6 +71,31 @@ public final class FeedbackVocabulary {
             }
         }
         return new FeedbackVocabulary(m);
+    }
+
+    /**
+     * The consistency view of a vocabulary: every live concept and facet with all its labels
+     * (preferred, alternative and hidden, every language), its first facet, its broader ids, and
+     * whether a facet above it is a regulated claim. Labels show in the vocabulary's default language.
+     */
+    public static FeedbackVocabulary from(Vocabulary v) {
+        Objects.requireNonNull(v, "vocabulary");
+        List<FeedbackConcept> out = new ArrayList<>();
+        for (Concept c : v.allConcepts()) {
+            List<String> labels = new ArrayList<>();
+            for (ConceptLabel l : c.labels()) {
+                if (!labels.contains(l.text())) {
+                    labels.add(l.text());
+                }
+            }
+            boolean claim = false;
+            for (Concept f : v.facetsOf(c.id())) {
+                claim |= f.facet().regulatedClaim();
+            }
+            out.add(new FeedbackConcept(c.id(), c.displayLabel(v.defaultLanguage()),
+                    v.facetOf(c.id()).map(Concept::id).orElse(null), c.isFacet(), labels, claim, List.copyOf(c.broader())));
+        }
+        return of(out);
     }
 
     /** An empty vocabulary (no labels, nothing shared). */
@@ -155,8 +183,24 @@ public final class FeedbackVocabulary {
         return out;
     }
 
+    /** Normal forms already computed; bounded, since feedback repeats a few thousand forms at most. */
+    private static final java.util.concurrent.ConcurrentHashMap<String, String> NORMAL = new java.util.concurrent.ConcurrentHashMap<>();
+    private static final int NORMAL_CACHE = 100_000;
+
     /** The normal form of a label or a piece of text: its words, lower-cased, folded, joined by one space. */
     public static String normalise(String text) {
+        String cached = NORMAL.get(text);
+        if (cached != null) {
+            return cached;
+        }
+        String n = tokenised(text);
+        if (NORMAL.size() < NORMAL_CACHE) {
+            NORMAL.put(text, n);
+        }
+        return n;
+    }
+
+    private static String tokenised(String text) {
         CueTokens t = CueTokens.of(text);
         StringBuilder b = new StringBuilder();
         for (int i = 0; i < t.size(); i++) {

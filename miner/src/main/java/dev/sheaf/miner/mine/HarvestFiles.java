@@ -52,9 +52,24 @@ public final class HarvestFiles {
 
     /** Writes harvest.json, harvest.csv and harvest-specs.csv into {@code dir}. */
     public static void write(Harvest h, Path dir) throws IOException {
-        writeJson(h, dir.resolve(JSON));
+        // the JSON is by far the largest file: write it on a second thread while the CSVs are written here
+        java.util.concurrent.CompletableFuture<Void> json = java.util.concurrent.CompletableFuture.runAsync(() -> {
+            try {
+                writeJson(h, dir.resolve(JSON));
+            } catch (IOException e) {
+                throw new java.io.UncheckedIOException(e);
+            }
+        });
         writeCsv(h, dir.resolve(CSV));
         writeSpecsCsv(h, dir.resolve(SPECS_CSV));
+        try {
+            json.join();
+        } catch (java.util.concurrent.CompletionException e) {
+            if (e.getCause() instanceof java.io.UncheckedIOException) {
+                throw ((java.io.UncheckedIOException) e.getCause()).getCause();
+            }
+            throw e;
+        }
     }
 
     public static String toJson(Harvest h) {
@@ -118,11 +133,25 @@ public final class HarvestFiles {
 
     /** "tents (df 120, z 8.31); backpacks (df 40, z 2.10)". */
     static String categories(List<Harvest.CategoryScore> cats) {
-        List<String> parts = new ArrayList<>();
+        StringBuilder b = new StringBuilder();
         for (Harvest.CategoryScore c : cats) {
-            parts.add(String.format(Locale.ROOT, "%s (df %d, z %.2f)", c.category(), c.df(), c.z()));
+            if (b.length() > 0) {
+                b.append("; ");
+            }
+            b.append(c.category()).append(" (df ").append(c.df()).append(", z ");
+            fixed2(b, c.z());
+            b.append(')');
         }
-        return String.join("; ", parts);
+        return b.toString();
+    }
+
+    /** Appends v with two decimals, rounded half away from zero (as {@code %.2f} with {@link Locale#ROOT}). */
+    static void fixed2(StringBuilder b, double v) {
+        java.math.BigDecimal d = java.math.BigDecimal.valueOf(v).setScale(2, java.math.RoundingMode.HALF_UP);
+        if (d.signum() == 0 && v < 0) {
+            b.append('-'); // as the formatter writes -0.00
+        }
+        b.append(d.toPlainString());
     }
 
     /** "left [match] right — source locator". */

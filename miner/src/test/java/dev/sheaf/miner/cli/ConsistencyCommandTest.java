@@ -63,7 +63,7 @@ class ConsistencyCommandTest {
         assertTrue(r.out().startsWith("attribute"), r.out());
         assertTrue(r.out().contains("weight"));
         assertTrue(r.out().contains("Words the vocabulary lacks: comfier (4)"), r.out());
-        assertTrue(r.err().contains("assignments.jsonl:5:"), r.err());
+        assertTrue(r.err().contains("assignments.jsonl line 5"), r.err());
         assertTrue(r.err().contains("1 feedback row left out"), r.err());
     }
 

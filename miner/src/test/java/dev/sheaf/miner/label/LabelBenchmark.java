@@ -1,0 +1,378 @@
+package dev.sheaf.miner.label;
+
+import dev.sheaf.miner.ingest.Field;
+import dev.sheaf.miner.ingest.FieldKind;
+import dev.sheaf.miner.ingest.Ingest;
+import dev.sheaf.miner.ingest.Listing;
+import dev.sheaf.miner.ingest.SourceSpec;
+import dev.sheaf.miner.text.Analysis;
+import dev.sheaf.miner.text.AnalysisProfile;
+import dev.sheaf.miner.text.Segmenter;
+import dev.sheaf.miner.text.TermDictionary;
+import dev.sheaf.vocab.Bucket;
+import dev.sheaf.vocab.Concept;
+import dev.sheaf.vocab.FacetProperties;
+import dev.sheaf.vocab.SchemeInfo;
+import dev.sheaf.vocab.Vocabulary;
+import it.unimi.dsi.fastutil.longs.Long2IntOpenHashMap;
+import java.io.BufferedWriter;
+import java.io.IOException;
+import java.lang.management.ManagementFactory;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Locale;
+import java.util.Random;
+import java.util.concurrent.ForkJoinPool;
+import java.util.concurrent.atomic.AtomicLong;
+import java.util.function.ToLongFunction;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import java.util.stream.IntStream;
+
+/**
+ * Labeling throughput with a large vocabulary, beside two references on the same listings:
+ * an analysis-only pass (the miner's {@link Analysis} over every field, no matching) and a
+ * straightforward baseline (one precompiled {@link java.util.regex} alternation of every label over
+ * the raw field text). Not a unit test: {@code bench/label-benchmark.sh} runs it (see
+ * bench/README-label.md).
+ *
+ * <pre>
+ * LabelBenchmark --corpus FILE.jsonl [--concepts 5000] [--labels 20000] [--vocab-sample 200000]
+ *                [--regex-sample 5000] [--threads N] [--rounds 2]
+ * LabelBenchmark --synthetic N --out FILE.jsonl      (when the corpus generator is not available)
+ * </pre>
+ */
+public final class LabelBenchmark {
+    private LabelBenchmark() {
+    }
+
+    public static void main(String[] args) throws Exception {
+        Path corpus = null;
+        Path out = null;
+        int synthetic = 0;
+        int concepts = 5000;
+        int labels = 20000;
+        int vocabSample = 200_000;
+        int regexSample = 5000;
+        int threads = Runtime.getRuntime().availableProcessors();
+        int rounds = 2;
+        for (int i = 0; i < args.length; i++) {
+            switch (args[i]) {
+                case "--corpus" -> corpus = Path.of(args[++i]);
+                case "--out" -> out = Path.of(args[++i]);
+                case "--synthetic" -> synthetic = Integer.parseInt(args[++i]);
+                case "--concepts" -> concepts = Integer.parseInt(args[++i]);
+                case "--labels" -> labels = Integer.parseInt(args[++i]);
+                case "--vocab-sample" -> vocabSample = Integer.parseInt(args[++i]);
+                case "--regex-sample" -> regexSample = Integer.parseInt(args[++i]);
+                case "--threads" -> threads = Integer.parseInt(args[++i]);
+                case "--rounds" -> rounds = Integer.parseInt(args[++i]);
+                default -> throw new IllegalArgumentException("unknown argument " + args[i]);
+            }
+        }
+        if (synthetic > 0) {
+            synthetic(out, synthetic);
+            return;
+        }
+        if (corpus == null) {
+            throw new IllegalArgumentException("give --corpus FILE.jsonl (or --synthetic N --out FILE)");
+        }
+
+        long t0 = System.nanoTime();
+        List<Listing> listings = Collections.synchronizedList(new ArrayList<>());
+        Ingest.builder().source(SourceSpec.of(corpus)).threads(1).build().run(listings::add);
+        List<Listing> all = new ArrayList<>(listings);
+        all.sort(Comparator.comparingLong(LabelBenchmark::line));
+        long textBytes = 0;
+        for (Listing l : all) {
+            textBytes += textBytes(l);
+        }
+        System.out.printf(Locale.ROOT, "corpus      %s: %,d listings, %,d bytes on disk, %,d bytes of field text (UTF-8); read in %.1f s%n",
+                corpus, all.size(), Files.size(corpus), textBytes, secs(t0));
+        System.out.printf(Locale.ROOT, "machine     %d cores available, %d threads used, Java %s, max heap %,d MB%n",
+                Runtime.getRuntime().availableProcessors(), threads, System.getProperty("java.version"),
+                Runtime.getRuntime().maxMemory() >> 20);
+
+        Analysis analysis = Analysis.of(AnalysisProfile.defaults());
+        t0 = System.nanoTime();
+        List<String> grams = frequentNgrams(analysis, all.subList(0, Math.min(vocabSample, all.size())), labels);
+        Vocabulary vocab = vocabulary(grams, concepts);
+        double vocabSecs = secs(t0);
+        t0 = System.nanoTime();
+        Labeler labeler = Labeler.of(vocab, analysis);
+        double compileSecs = secs(t0);
+        System.out.printf(Locale.ROOT, "vocabulary  %,d concepts in %d facets, %,d labels from the %,d most frequent 1-3-grams of %,d listings "
+                        + "(%.1f s) + 2 number facets; compiled in %.2f s (%,d labels in the matcher, %d notes)%n",
+                vocab.concepts().size(), vocab.facets().size() - 2, grams.size(), grams.size(), Math.min(vocabSample, all.size()),
+                vocabSecs, compileSecs, labeler.labelsCompiled(), labeler.notes().size());
+
+        ForkJoinPool pool = new ForkJoinPool(threads);
+        List<Listing> regexListings = all.subList(0, Math.min(regexSample, all.size()));
+        long regexBytes = 0;
+        for (Listing l : regexListings) {
+            regexBytes += textBytes(l);
+        }
+        t0 = System.nanoTime();
+        Pattern regex = alternation(vocab);
+        double regexCompile = secs(t0);
+
+        Result an = null;
+        Result lab = null;
+        Result re = null;
+        for (int round = 0; round < rounds; round++) { // the first round warms the JIT
+            ThreadLocal<Segmenter> segs = ThreadLocal.withInitial(analysis::newSegmenter);
+            an = time(pool, all, l -> {
+                long[] n = {0};
+                segs.get().analyze(l, (f, p, ids, st, en, len) -> n[0] += len);
+                return n[0];
+            });
+            lab = time(pool, all, l -> labeler.label(l).assignments().size());
+            re = time(pool, regexListings, l -> {
+                long n = 0;
+                Matcher m = regex.matcher("");
+                for (Field f : l.fields()) {
+                    if (f.kind() == FieldKind.SPEC) {
+                        m.reset(f.key());
+                        while (m.find()) {
+                            n++;
+                        }
+                    }
+                    m.reset(f.text());
+                    while (m.find()) {
+                        n++;
+                    }
+                }
+                return n;
+            });
+            if (round < rounds - 1) {
+                System.out.printf(Locale.ROOT, "warm-up     round %d done%n", round + 1);
+            }
+        }
+        pool.shutdown();
+        System.out.println();
+        System.out.printf(Locale.ROOT, "%-34s %12s %14s %10s %10s %12s %12s%n", "pass", "listings", "listings/s", "MB/s", "CPU s",
+                "MB/CPU-s", "output");
+        row("analysis only (miner's Analysis)", all.size(), textBytes, an, "tokens");
+        row("labeling (Labeler.label)", all.size(), textBytes, lab, "assignments");
+        row("regex alternation (sample)", regexListings.size(), regexBytes, re, "matches");
+        System.out.println();
+        double overAnalysis = lab.cpu / an.cpu;
+        double overAnalysisWall = lab.wall / an.wall;
+        double regexRate = regexBytes / re.cpu;
+        double labRate = textBytes / lab.cpu;
+        System.out.printf(Locale.ROOT, "labeling / analysis-only: %.2fx CPU time, %.2fx wall time (target <= 1.5x)%n", overAnalysis,
+                overAnalysisWall);
+        System.out.printf(Locale.ROOT, "labeling vs regex baseline: %.0fx faster per CPU-second, %.0fx per wall-second (target >= 10x); "
+                + "regex compiled in %.2f s%n", labRate / regexRate, (textBytes / lab.wall) / (regexBytes / re.wall), regexCompile);
+        System.out.printf(Locale.ROOT, "peak RSS    %,d MB (whole JVM, corpus held in memory); peak heap after GC %,d MB%n",
+                peakRssKb() >> 10, peakHeap() >> 20);
+    }
+
+    private record Result(double wall, double cpu, long output) {
+    }
+
+    private static Result time(ForkJoinPool pool, List<Listing> ls, ToLongFunction<Listing> f) throws Exception {
+        System.gc();
+        long c0 = cpuNanos();
+        long t0 = System.nanoTime();
+        AtomicLong out = new AtomicLong();
+        int chunk = 1000;
+        pool.submit(() -> IntStream.range(0, (ls.size() + chunk - 1) / chunk).parallel().forEach(k -> {
+            long n = 0;
+            for (int i = k * chunk; i < Math.min(ls.size(), (k + 1) * chunk); i++) {
+                n += f.applyAsLong(ls.get(i));
+            }
+            out.addAndGet(n);
+        })).get();
+        return new Result(secs(t0), (cpuNanos() - c0) / 1e9, out.get());
+    }
+
+    private static void row(String name, long n, long bytes, Result r, String what) {
+        System.out.printf(Locale.ROOT, "%-34s %,12d %,14.0f %10.2f %10.2f %12.2f %,12d %s%n", name, n, n / r.wall, bytes / 1e6 / r.wall,
+                r.cpu, bytes / 1e6 / r.cpu, r.output, what);
+    }
+
+    private static long cpuNanos() {
+        return ((com.sun.management.OperatingSystemMXBean) ManagementFactory.getOperatingSystemMXBean()).getProcessCpuTime();
+    }
+
+    private static double secs(long t0) {
+        return (System.nanoTime() - t0) / 1e9;
+    }
+
+    private static long line(Listing l) {
+        String loc = l.locator();
+        return loc.startsWith("line ") ? Long.parseLong(loc.substring(5)) : 0;
+    }
+
+    private static long textBytes(Listing l) {
+        long b = 0;
+        for (Field f : l.fields()) {
+            b += f.text().getBytes(StandardCharsets.UTF_8).length + f.key().getBytes(StandardCharsets.UTF_8).length;
+        }
+        return b;
+    }
+
+    /** The {@code limit} most frequent 1-, 2- and 3-grams of the miner's segments (no numbers), most frequent first. */
+    static List<String> frequentNgrams(Analysis analysis, List<Listing> sample, int limit) {
+        Long2IntOpenHashMap[] counts = {new Long2IntOpenHashMap(), new Long2IntOpenHashMap(), new Long2IntOpenHashMap()};
+        Segmenter seg = analysis.newSegmenter();
+        TermDictionary dict = analysis.terms();
+        for (Listing l : sample) {
+            seg.analyze(l, (f, p, ids, st, en, len) -> {
+                for (int i = 0; i < len; i++) {
+                    long key = 0;
+                    for (int n = 0; n < 3 && i + n < len; n++) {
+                        int id = ids[i + n];
+                        if (id >= (1 << 21)) {
+                            throw new IllegalStateException("more than 2^21 distinct terms; use a smaller --vocab-sample");
+                        }
+                        key = (key << 21) | id;
+                        counts[n].addTo(key, 1);
+                    }
+                }
+            });
+        }
+        String[] terms = dict.snapshot();
+        List<Object[]> all = new ArrayList<>();
+        for (int n = 0; n < 3; n++) {
+            int len = n + 1;
+            for (Long2IntOpenHashMap.Entry e : counts[n].long2IntEntrySet()) {
+                if (e.getIntValue() < 5) {
+                    continue;
+                }
+                StringBuilder b = new StringBuilder();
+                boolean numeric = false;
+                for (int k = len - 1; k >= 0; k--) {
+                    String t = terms[(int) ((e.getLongKey() >>> (21 * k)) & ((1 << 21) - 1))];
+                    numeric |= Character.isDigit(t.charAt(0));
+                    b.append(b.length() == 0 ? "" : " ").append(t);
+                }
+                if (!numeric) {
+                    all.add(new Object[] {b.toString(), e.getIntValue()});
+                }
+            }
+        }
+        all.sort(Comparator.comparingInt((Object[] x) -> (Integer) x[1]).reversed().thenComparing(x -> (String) x[0]));
+        List<String> out = new ArrayList<>();
+        for (Object[] x : all.subList(0, Math.min(limit, all.size()))) {
+            out.add((String) x[0]);
+        }
+        return out;
+    }
+
+    /**
+     * {@code concepts} concepts in 50 term facets (every fifth facet limited to three categories), each
+     * with up to four of the n-grams as labels (preferred, two alternatives, one hidden: n-gram i, i+C,
+     * i+2C, i+3C), plus a weight facet in kg with buckets and a capacity facet in L.
+     */
+    static Vocabulary vocabulary(List<String> grams, int concepts) {
+        List<Concept> c = new ArrayList<>();
+        int facets = 50;
+        List<String> someCategories = List.of("tents", "backpacks", "stoves");
+        for (int f = 0; f < facets; f++) {
+            FacetProperties p = FacetProperties.terms().withMultiValued(true);
+            if (f % 5 == 4) {
+                p = p.withCategories(someCategories);
+            }
+            c.add(Concept.builder(String.format("f%02d", f)).prefLabel(String.format("facet %02d", f)).facet(p).build());
+        }
+        int n = Math.min(concepts, grams.size());
+        for (int i = 0; i < n; i++) {
+            Concept.Builder b = Concept.builder(String.format("c%05d", i)).prefLabel(grams.get(i)).broader(String.format("f%02d", i % facets));
+            if (i + n < grams.size()) {
+                b.altLabel(grams.get(i + n));
+            }
+            if (i + 2 * n < grams.size()) {
+                b.altLabel(grams.get(i + 2 * n));
+            }
+            if (i + 3 * n < grams.size()) {
+                b.hiddenLabel(grams.get(i + 3 * n));
+            }
+            c.add(b.build());
+        }
+        c.add(Concept.builder("weight").prefLabel("weight").altLabel("item weight").facet(FacetProperties.number("kg",
+                List.of(new Bucket("under 0.5 kg", null, 0.5), new Bucket("0.5-1 kg", 0.5, 1.0), new Bucket("1-2 kg", 1.0, 2.0),
+                        new Bucket("2 kg and over", 2.0, null)))).build());
+        c.add(Concept.builder("capacity").prefLabel("capacity").altLabel("volume").facet(FacetProperties.number("L", List.of())).build());
+        return Vocabulary.of(SchemeInfo.of("bench", "Benchmark vocabulary"), c, List.of(), List.of());
+    }
+
+    /**
+     * The straightforward baseline: every label of every concept in one alternation, longest label
+     * first (java.util.regex takes the first alternative that matches, not the longest), words
+     * joined by white space or hyphens, case-insensitive, bounded by non-letters.
+     */
+    static Pattern alternation(Vocabulary v) {
+        List<String> texts = new ArrayList<>();
+        for (Concept c : v.allConcepts()) {
+            c.labels().forEach(l -> texts.add(l.text()));
+        }
+        texts.sort(Comparator.comparingInt(String::length).reversed().thenComparing(Comparator.naturalOrder()));
+        StringBuilder b = new StringBuilder("(?<![\\p{L}\\p{N}])(?:");
+        for (int i = 0; i < texts.size(); i++) {
+            if (i > 0) {
+                b.append('|');
+            }
+            String[] words = texts.get(i).split("[\\s-]+");
+            for (int w = 0; w < words.length; w++) {
+                if (w > 0) {
+                    b.append("[\\s-]+");
+                }
+                b.append(Pattern.quote(words[w]));
+            }
+        }
+        b.append(")(?![\\p{L}\\p{N}])");
+        return Pattern.compile(b.toString(), Pattern.CASE_INSENSITIVE | Pattern.UNICODE_CASE);
+    }
+
+    private static long peakRssKb() {
+        try {
+            for (String line : Files.readAllLines(Path.of("/proc/self/status"))) {
+                if (line.startsWith("VmHWM:")) {
+                    return Long.parseLong(line.replaceAll("[^0-9]", ""));
+                }
+            }
+        } catch (IOException | NumberFormatException e) {
+            return -1;
+        }
+        return -1;
+    }
+
+    private static long peakHeap() {
+        long peak = 0;
+        for (var pool : ManagementFactory.getMemoryPoolMXBeans()) {
+            if (pool.getType() == java.lang.management.MemoryType.HEAP && pool.getCollectionUsage() != null) {
+                peak += pool.getPeakUsage().getUsed();
+            }
+        }
+        return peak;
+    }
+
+    /** A stand-in corpus of the generator's JSON Lines shape, for when {@code ./sheaf generate} is not built. */
+    static void synthetic(Path out, int n) throws IOException {
+        Random r = new Random(42);
+        String[] cats = {"tents", "backpacks", "stoves", "insulated-jackets", "rain-jackets", "sleeping-bags", "footwear"};
+        String[] mats = {"ripstop nylon", "recycled polyester", "merino wool", "stainless steel", "aluminium", "canvas", "goose down"};
+        String[] feats = {"waterproof", "windproof", "packable", "adjustable hood", "taped seams", "two-way zipper", "no hood",
+            "PFC-free DWR", "non-slip sole", "reflective trim", "YKK zips", "hip belt pockets"};
+        Files.createDirectories(out.toAbsolutePath().getParent());
+        try (BufferedWriter w = Files.newBufferedWriter(out, StandardCharsets.UTF_8)) {
+            for (int i = 1; i <= n; i++) {
+                String cat = cats[r.nextInt(cats.length)];
+                String mat = mats[r.nextInt(mats.length)];
+                w.write(String.format(Locale.ROOT, "{\"id\":\"FH-%06d\",\"category\":\"%s\",\"title\":\"Fernhollow %s %d\","
+                                + "\"description\":\"A %s %s with %s and %s, built for long trails. Not %s.\","
+                                + "\"bullets\":[\"%s\",\"%s\"],\"specs\":{\"Weight\":\"%d g\",\"Material\":\"%s\"}}%n",
+                        i, cat, cat, i, feats[r.nextInt(feats.length)], cat, mat, feats[r.nextInt(feats.length)],
+                        feats[r.nextInt(feats.length)], feats[r.nextInt(feats.length)], feats[r.nextInt(feats.length)],
+                        200 + r.nextInt(3000), mat));
+            }
+        }
+    }
+}
