@@ -32,7 +32,6 @@ import dev.sheaf.miner.measure.FeedbackMention;
 import dev.sheaf.miner.measure.FeedbackSentences;
 import dev.sheaf.miner.measure.FeedbackTermFinder;
 import dev.sheaf.miner.measure.FeedbackVocabulary;
-import dev.sheaf.miner.measure.FeedbackVocabularyFile;
 import dev.sheaf.miner.measure.FillRate;
 import dev.sheaf.miner.measure.Flag;
 import dev.sheaf.miner.measure.FlagFill;
@@ -115,7 +114,8 @@ public final class AuditRun {
 
         // 1. label
         Path labelDir = outDir.resolve("labels");
-        Labeler labeler = Labeler.of(vocab, Analysis.of(AnalysisProfile.resolve(profileOf(ws))));
+        AnalysisProfile profile = AnalysisProfile.resolve(profileOf(ws));
+        Labeler labeler = Labeler.of(vocab, Analysis.of(profile));
         LabelRun.Builder lb = LabelRun.builder(labeler).sources(ws.sources()).workspaceRoot(ws.dir())
                 .threads(Math.max(1, Math.min(4, Runtime.getRuntime().availableProcessors())));
         LabelRunSummary ls;
@@ -142,7 +142,7 @@ public final class AuditRun {
         AssignmentsJsonl.read(assignments, vocab, a -> collectEvidence(a, evidence, evidenceTotal));
 
         // 3. agreement and consistency
-        FeedbackVocabulary fv = FeedbackVocabularyFile.read(ws.vocabulary());
+        FeedbackVocabulary fv = FeedbackVocabulary.from(vocab);
         FlagThresholds thresholds = FlagThresholds.DEFAULTS;
         Pseudonyms pseudonyms = Pseudonyms.fromKeyFile(ws.dir().resolve(".sheaf").resolve("pseudonym.key"));
         AgreementReport agreement = null;
@@ -160,14 +160,21 @@ public final class AuditRun {
         if (ws.feedback() != null && Files.isRegularFile(ws.feedback())) {
             FeedbackSentences sentences = FeedbackCsv.read(ws.feedback(), FeedbackColumns.DEFAULT,
                     ws.dir().relativize(ws.feedback()).toString());
-            GroundingAssignments ga = GroundingAssignments.read(assignments, "labels/" + AssignmentsJsonl.FILE_NAME, fv);
+            java.util.Set<String> named = new java.util.HashSet<>();
+            sentences.sentences().forEach(x -> {
+                named.add(x.targetId());
+                named.add(x.referenceId());
+            });
+            GroundingAssignments ga = GroundingAssignments.read(assignments, vocab, named);
             GroundingScales bundled = GroundingScales.bundledExample();
             boolean demoScales = bundled.scales().stream().anyMatch(x -> fv.concept(x.facet()).isPresent());
             Path wsScales = ws.dir().resolve(GroundingScales.WORKSPACE_FILE);
             GroundingScales scales = GroundingScales.first(Files.isRegularFile(wsScales) ? GroundingScales.read(wsScales) : null,
                     demoScales ? bundled : null);
-            consistency = ConsistencyAnalysis.run(sentences, ConsistencyOptions.builder(FeedbackTermFinder.exactLabels(fv))
-                    .vocabulary(fv).scales(scales).catalog(ga.catalog()).pseudonyms(pseudonyms).build());
+            java.util.Set<String> stopWords = new java.util.TreeSet<>(profile.stopWords());
+            stopWords.addAll(ConsistencyOptions.FEEDBACK_FRAME_WORDS);
+            consistency = ConsistencyAnalysis.run(sentences, ConsistencyOptions.builder(FeedbackTermFinder.labeler(labeler))
+                    .vocabulary(fv).scales(scales).catalog(ga.catalog()).pseudonyms(pseudonyms).stopWords(stopWords).build());
             say(progress, "consistency: " + consistency.sentences() + " sentences, " + consistency.mentions().size() + " mentions");
             if (consistency.hasProblems()) {
                 problems.add(consistency.problems().size() + " feedback row(s) left out; see consistency/problems.csv");
