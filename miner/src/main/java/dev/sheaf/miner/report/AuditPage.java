@@ -82,7 +82,7 @@ final class AuditPage {
             b.keyFigure(KeyFigure.count("Flagged " + k.label(), flags.count(k), "attributes"));
         }
         if (!pseudonymNote.isEmpty()) {
-            b.caution(pseudonymNote);
+            b.meta("Written by sheaf audit. " + pseudonymNote);
         }
         attention(b);
         b.section(coverageSection());
