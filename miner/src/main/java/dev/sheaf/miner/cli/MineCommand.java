@@ -129,8 +129,11 @@ final class MineCommand implements Callable<Integer> {
     @Option(names = "--temp-dir", paramLabel = "DIR", description = "Folder for temporary spill files (default: the system temp folder).")
     Path tempDir;
 
-    @Option(names = "--no-progress", description = "No progress bar on stderr (it is also off when stderr is not a terminal).")
+    @Option(names = "--no-progress", description = "No progress bar on stderr (it is also off when there is no terminal).")
     boolean noProgress;
+
+    @Option(names = "--progress", description = "Show the progress bar on stderr even without a terminal (for logs).")
+    boolean progress;
 
     @Override
     public Integer call() {
@@ -194,7 +197,7 @@ final class MineCommand implements Callable<Integer> {
         if (nThreads < 1 || nThreads > 255) {
             return usage(err, "--threads must be from 1 to 255, got " + nThreads);
         }
-        boolean showProgress = !noProgress && System.console() != null;
+        boolean showProgress = !noProgress && (progress || System.console() != null);
         Harvester.Builder hb = Harvester.builder().profile(prof).options(opts).threads(nThreads).sources(job.sourceNames());
         if (tempDir != null) {
             hb.tempRoot(tempDir);

@@ -184,7 +184,12 @@ public final class LabelRun {
         /** Waits until every submitted listing is labeled; rethrows the first labeling failure. */
         void drain() throws IOException {
             for (int i = 0; i < workers.size(); i++) {
-                queue.add(new Item(null, -1));
+                try {
+                    queue.put(new Item(null, -1)); // put, not add: a fast single-thread producer can leave the queue full
+                } catch (InterruptedException e) {
+                    Thread.currentThread().interrupt();
+                    throw new IOException("interrupted while stopping the labeling threads", e);
+                }
             }
             for (Thread t : workers) {
                 try {

@@ -251,6 +251,21 @@ final class MineJob {
 
     void close() {
         finished = true;
+        for (Thread t : workerThreads) {
+            if (t != null && t.isAlive()) {
+                t.interrupt(); // closed without finish(): the run is abandoned
+            }
+        }
+        for (Thread t : workerThreads) {
+            try {
+                if (t != null) {
+                    t.join(10_000);
+                }
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+                break;
+            }
+        }
         for (AnalysisWorker w : workers) {
             if (w != null) {
                 w.close();
@@ -464,10 +479,15 @@ final class MineJob {
                 Arrays.fill(candOf[m], -1);
             }
             int[] candLevel = new int[cands];
+            int[] reach = new int[vocab];
+            int[] t = new int[HarvestOptions.MAX_NGRAM];
             for (int c = 0; c < cands; c++) {
                 int p = selected[c];
-                candLevel[c] = scoring.level(p);
-                candOf[scoring.level(p)][scoring.index(p)] = c;
+                int m = scoring.level(p);
+                candLevel[c] = m;
+                candOf[m][scoring.index(p)] = c;
+                tokensOf(m, scoring.index(p), t);
+                reach[t[0]] = Math.max(reach[t[0]], m);
             }
             int nCats = categoryNames.size();
             int[] rank = sourceRanks();
@@ -477,7 +497,7 @@ final class MineJob {
             for (AnalysisWorker w : workers) {
                 FinalPart part = new FinalPart(cands, nCats, k);
                 parts.add(part);
-                futures.add(pool.submit(() -> finalWorker(w, part, candOf, rank)));
+                futures.add(pool.submit(() -> finalWorker(w, part, candOf, reach, rank)));
             }
             await(futures);
             FinalPart total = parts.get(0);
@@ -513,43 +533,38 @@ final class MineJob {
             return rank;
         }
 
-        private void finalWorker(AnalysisWorker w, FinalPart part, int[][] candOf, int[] rank) {
-            int[][] cur = {new int[256]};
+        private void finalWorker(AnalysisWorker w, FinalPart part, int[][] candOf, int[] reach, int[] rank) {
             int[] lastStamp = new int[part.cands];
             w.store.forEach((index, sym, len) -> {
                 int stamp = index + 1;
                 int cat = w.categories.getInt(index);
                 long ord = w.order.getLong(index);
                 long key = ((long) rank[(int) (ord >>> 32)] << 32) | (ord & 0xFFFFFFFFL);
-                int from = 0;
-                for (int i = 0; i <= len; i++) {
-                    if (i == len || sym[i] == TokenStore.BOUNDARY) {
-                        int segLen = i - from;
-                        if (segLen > 0) {
-                            if (cur[0].length < segLen) {
-                                cur[0] = new int[segLen * 2];
-                            }
-                            int[] c = cur[0];
-                            for (int j = 0; j < segLen; j++) {
-                                int id = sym[from + j];
-                                c[j] = frequent1[id] ? id : -1;
-                                if (c[j] >= 0) {
-                                    hit(candOf[1][id], w.index, index, from + j, stamp, cat, key, part, lastStamp);
-                                }
-                            }
-                            for (int m = 2; m <= candidateLevels() && m <= segLen; m++) {
-                                FrequentTable t = levels[m];
-                                int[] co = candOf[m];
-                                for (int j = 0; j + m <= segLen; j++) {
-                                    int idx = c[j] >= 0 && c[j + 1] >= 0 ? t.get(FrequentTable.code(c[j], sym[from + j + m - 1])) : -1;
-                                    c[j] = idx;
-                                    if (idx >= 0) {
-                                        hit(co[idx], w.index, index, from + j, stamp, cat, key, part, lastStamp);
-                                    }
-                                }
-                            }
+                int end = 0;
+                for (int j = 0; j < len; j++) {
+                    int id = sym[j];
+                    if (id == TokenStore.BOUNDARY) {
+                        continue;
+                    }
+                    if (end <= j) {
+                        end = j;
+                        while (end < len && sym[end] != TokenStore.BOUNDARY) {
+                            end++;
                         }
-                        from = i + 1;
+                    }
+                    // only positions where some candidate starts; follow the prefix chain as far as one reaches
+                    int longest = Math.min(reach[id], end - j);
+                    if (longest == 0) {
+                        continue;
+                    }
+                    hit(candOf[1][id], w.index, index, j, stamp, cat, key, part, lastStamp);
+                    int idx = id;
+                    for (int m = 2; m <= longest; m++) {
+                        idx = levels[m].get(FrequentTable.code(idx, sym[j + m - 1]));
+                        if (idx < 0) {
+                            break;
+                        }
+                        hit(candOf[m][idx], w.index, index, j, stamp, cat, key, part, lastStamp);
                     }
                 }
             });

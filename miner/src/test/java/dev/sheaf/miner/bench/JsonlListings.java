@@ -6,9 +6,7 @@ import com.fasterxml.jackson.core.JsonToken;
 import dev.sheaf.miner.ingest.Field;
 import dev.sheaf.miner.ingest.FieldKind;
 import dev.sheaf.miner.ingest.Listing;
-import java.io.BufferedReader;
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -30,23 +28,67 @@ public final class JsonlListings {
     /** Streams every listing of the file to the sink (from this thread); returns the number of bad lines. */
     public static int read(Path file, String displayName, Consumer<Listing> sink, Consumer<String> problems) throws IOException {
         int bad = 0;
-        try (BufferedReader r = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
-            String line;
+        try (java.io.InputStream in = Files.newInputStream(file)) {
+            byte[] buf = new byte[1 << 16];
+            byte[] line = new byte[1 << 12];
+            int len = 0;
             int no = 0;
-            while ((line = r.readLine()) != null) {
-                no++;
-                if (line.isBlank()) {
-                    continue;
+            int n;
+            boolean eof = false;
+            while (!eof) {
+                n = in.read(buf);
+                if (n < 0) {
+                    eof = true;
+                    n = 0;
                 }
-                try {
-                    sink.accept(parse(line, displayName, "line " + no));
-                } catch (IOException | IllegalArgumentException e) {
-                    bad++;
-                    problems.accept(displayName + ",line " + no + ",parse," + e.getMessage().replace('\n', ' '));
+                int from = 0;
+                for (int i = 0; i <= n; i++) {
+                    boolean endOfLine = i < n ? buf[i] == '\n' : eof;
+                    if (i == n && !eof) {
+                        int k = n - from;
+                        if (len + k > line.length) {
+                            line = java.util.Arrays.copyOf(line, Math.max(line.length * 2, len + k));
+                        }
+                        System.arraycopy(buf, from, line, len, k);
+                        len += k;
+                        break;
+                    }
+                    if (!endOfLine) {
+                        continue;
+                    }
+                    int k = i - from;
+                    if (len + k > line.length) {
+                        line = java.util.Arrays.copyOf(line, Math.max(line.length * 2, len + k));
+                    }
+                    System.arraycopy(buf, from, line, len, k);
+                    len += k;
+                    from = i + 1;
+                    if (eof && i == n && len == 0) {
+                        break;
+                    }
+                    no++;
+                    if (!blank(line, len)) {
+                        try {
+                            sink.accept(parse(line, len, displayName, "line " + no));
+                        } catch (IOException | IllegalArgumentException e) {
+                            bad++;
+                            problems.accept(displayName + ",line " + no + ",parse," + e.getMessage().replace('\n', ' '));
+                        }
+                    }
+                    len = 0;
                 }
             }
         }
         return bad;
+    }
+
+    private static boolean blank(byte[] b, int len) {
+        for (int i = 0; i < len; i++) {
+            if (b[i] != ' ' && b[i] != '\r' && b[i] != '\t') {
+                return false;
+            }
+        }
+        return true;
     }
 
     public static List<Listing> readAll(Path file, String displayName) throws IOException {
@@ -57,11 +99,11 @@ public final class JsonlListings {
         return out;
     }
 
-    static Listing parse(String line, String source, String locator) throws IOException {
+    static Listing parse(byte[] line, int length, String source, String locator) throws IOException {
         String id = "";
         String category = "";
         List<Field> fields = new ArrayList<>();
-        try (JsonParser p = JSON.createParser(line)) {
+        try (JsonParser p = JSON.createParser(line, 0, length)) {
             if (p.nextToken() != JsonToken.START_OBJECT) {
                 throw new IOException("a line must hold one JSON object");
             }

@@ -126,6 +126,15 @@ class MineCommandTest {
     }
 
     @Test
+    void theProgressBarGoesToStderrAndTheDataToStdout() {
+        assertEquals(ExitCodes.OK, run("mine", FEED.toString(), "--out", tmp.resolve("g").toString(), "--progress"));
+        String e = err.toString();
+        assertTrue(e.contains("sheaf mine") && e.contains("listings") && e.contains("problems"), e);
+        assertTrue(e.contains("counting 2-grams"), e);
+        assertFalse(out.toString().contains("counting 2-grams"), out.toString());
+    }
+
+    @Test
     void theDefaultFeedReadsListingFilesThroughIngest() {
         MineCommand.feed = ListingFeeds.DEFAULT;
         assertEquals(ExitCodes.OK, run("mine", FEED.toString(), "--out", tmp.toString()), err.toString());

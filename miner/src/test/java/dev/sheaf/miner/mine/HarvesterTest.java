@@ -251,4 +251,31 @@ class HarvesterTest {
         assertEquals(weightRows, weight.rows());
         assertEquals(weightRows, weight.values().stream().mapToLong(Harvest.SpecValueCount::rows).sum());
     }
+
+    @Test
+    void anEmptyCorpusGivesAnEmptyHarvest() {
+        Harvest h = mine(List.of(), HarvestOptions.defaults(), 2, 256L << 20);
+        assertEquals(0, h.corpus().listings());
+        assertTrue(h.candidates().isEmpty());
+        Listing blank = new Listing("b", "", "s", "", List.of(Field.of(FieldKind.TITLE, " . , the and")));
+        Harvest h2 = mine(List.of(blank), HarvestOptions.defaults(), 1, 256L << 20);
+        assertEquals(1, h2.corpus().listings());
+        assertEquals(0, h2.corpus().tokens());
+    }
+
+    @Test
+    void aRunClosedWithoutFinishingStopsItsThreads() throws InterruptedException {
+        Harvester h = Harvester.builder().threads(2).tempRoot(tmp).build();
+        Harvester.Run run = h.start();
+        CATALOG.subList(0, 300).forEach(run);
+        run.close();
+        Thread.sleep(100);
+        assertTrue(Thread.getAllStackTraces().keySet().stream().noneMatch(t -> t.getName().startsWith("sheaf-mine-") && t.isAlive()),
+                "worker threads must end when the run is closed");
+        try (java.util.stream.Stream<Path> left = java.nio.file.Files.list(tmp)) {
+            assertEquals(0, left.count(), "temporary files must be removed");
+        } catch (java.io.IOException e) {
+            throw new AssertionError(e);
+        }
+    }
 }
