@@ -163,8 +163,9 @@ public final class Labeler {
             if (unit != null) {
                 dim = Units.dimensionOf(unit).orElse(null);
                 if (dim == null) {
-                    notes.add("facet " + f.id() + " has unit \"" + unit + "\", which Sheaf cannot convert to; only values "
-                            + "written in exactly that unit are read (known units: kg, g, lb, oz, m, cm, mm, in, L, mL, ...)");
+                    notes.add("facet " + f.id() + " has unit \"" + unit + "\", which Sheaf cannot convert to; its values are read "
+                            + "as written (quantities in exactly that unit, or a lone number in a spec value); known units are "
+                            + "kg, g, lb, oz, m, cm, mm, in, L, mL, fl oz, gal, °C, °F, mm H2O, FP, lm, h, min, D, person, season");
                 }
             }
             nfs.add(new NumberFacet(f.id(), f.facet(), dim));
@@ -361,7 +362,13 @@ public final class Labeler {
             return result;
         }
 
-        private void valueState(String value) {
+        /**
+         * What a spec value says about the concept its key names: negative only when the whole
+         * value is a denial ("No", "None.", "Not included", "No hood" under "Hood") — a longer
+         * value is a statement of its own ("Vegan: no animal-derived materials") and is matched
+         * like any text; unknown for "-", "n/a", "?".
+         */
+        private void valueState(String key, String value) {
             String v = value.strip().toLowerCase(Locale.ROOT);
             while (!v.isEmpty() && ".!;,".indexOf(v.charAt(v.length() - 1)) >= 0) {
                 v = v.substring(0, v.length() - 1).strip();
@@ -372,9 +379,11 @@ public final class Labeler {
                 keyState = KeyState.UNKNOWN;
                 return;
             }
-            String first = v.split("[\\s,;/]+", 2)[0];
-            if (negationWords.contains(first) || v.equals("false") || v.equals("n") || v.equals("0")
-                    || v.equals("\u2717") || v.equals("\u2718")) {
+            String[] words = v.split("[\\s,;/]+");
+            String rest = v.substring(words[0].length()).strip();
+            boolean denial = negationWords.contains(words[0]) && (words.length == 1 || rest.equals("included")
+                    || rest.equals("available") || rest.equals(key.strip().toLowerCase(Locale.ROOT)));
+            if (denial || v.equals("false") || v.equals("n") || v.equals("0") || v.equals("\u2717") || v.equals("\u2718")) {
                 keyState = KeyState.NEGATIVE;
                 keyCue = value.strip();
                 return;
@@ -423,7 +432,7 @@ public final class Labeler {
         private void match(int fi, SegmentPart part, int[] ids, int[] starts, int[] ends, int n) {
             field = listing.fields().get(fi);
             if (part == SegmentPart.SPEC_KEY && keyStateField != fi) {
-                valueState(field.text());
+                valueState(field.key(), field.text());
                 keyStateField = fi;
             }
             String text = part == SegmentPart.SPEC_KEY ? field.key() : field.text();

@@ -360,8 +360,9 @@ public final class CoverageReport {
                 for (String val : e.getValue()) {
                     values.get(f).addTo(val, 1);
                 }
-                // two numbers in one bucket are still two values: conflicts count distinct numbers
-                int distinct = numbers.containsKey(f) ? numbers.get(f).size() : e.getValue().size();
+                // two numbers in one bucket are still two values: conflicts count distinct numbers;
+                // a value and a broader one ("hood", "insulated hood") are one statement, not two
+                int distinct = numbers.containsKey(f) ? numbers.get(f).size() : mostSpecific(e.getValue());
                 if (!p.multiValued() && distinct > 1) {
                     conflicts.addTo(key(f, cat), 1);
                     if (conflictIds.get(f).size() < options.examples()) {
@@ -386,6 +387,27 @@ public final class CoverageReport {
                     pairs.addTo(key(s[x], s[y]), 1);
                 }
             }
+        }
+
+        /** How many of the values are not broader than another of them. */
+        private int mostSpecific(Set<String> vals) {
+            if (vals.size() < 2) {
+                return vals.size();
+            }
+            int n = 0;
+            for (String x : vals) {
+                boolean broader = false;
+                for (String y : vals) {
+                    if (!x.equals(y) && v.contains(y) && v.ancestors(y).contains(x)) {
+                        broader = true;
+                        break;
+                    }
+                }
+                if (!broader) {
+                    n++;
+                }
+            }
+            return n;
         }
 
         private static String numberKey(FacetProperties p, Assignment x) {

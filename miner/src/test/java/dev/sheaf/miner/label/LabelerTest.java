@@ -186,6 +186,11 @@ class LabelerTest {
         assertEquals(Map.of("hooded", "negated"), concepts(listing("FH-4", "jackets", Field.spec("Hood", "No"))));
         assertEquals(Map.of("waterproof", "stated"), concepts(listing("FH-4", "jackets", Field.spec("Waterproof", "Yes"))));
         assertEquals(Map.of(), concepts(listing("FH-4", "jackets", Field.spec("Hood", "n/a"))));
+        assertEquals(Map.of("hooded", "negated"), concepts(listing("FH-4", "jackets", Field.spec("Hood", "No hood"))));
+        assertEquals(Map.of("waterproof", "negated"), concepts(listing("FH-4", "jackets", Field.spec("Waterproof", "Not included"))));
+        // a longer value is a statement of its own, not a denial of the key
+        assertEquals(Map.of("packable", "stated"),
+                concepts(listing("FH-4", "jackets", Field.spec("Packable", "no stuff sack needed, packs small"))));
         Assignment a = only(listing("FH-4", "jackets", Field.spec("Hood", "None.")), "hooded");
         Evidence e = a.evidence().get(0);
         assertEquals(SegmentPart.SPEC_KEY, e.part());

@@ -114,6 +114,13 @@ class CoverageReportTest {
                 listing("P2", "packs", "a.csv", "weight=1.2", "merino-wool", "ripstop-nylon")), List.of());
         assertEquals(1, fill(r, "weight", FillRate.ALL).conflicts());
         assertEquals(0, fill(r, "material", FillRate.ALL).conflicts(), "material is multi-valued");
+        // a value with a broader value of the same facet is one statement: no-see-um mesh is under mesh
+        Vocabulary single = Vocabulary.of(vocab.scheme(), vocab.allConcepts().stream()
+                .map(c -> c.id().equals("material") ? c.toBuilder().facet(c.facet().withMultiValued(false)).build() : c).toList(),
+                vocab.retired(), List.of());
+        CoverageReport h = CoverageReport.of(single, CoverageOptions.defaults(), List.of(
+                listing("M1", "tents", "a.csv", "mesh", "no-see-um-mesh"), listing("M2", "tents", "a.csv", "mesh", "nylon")), List.of());
+        assertEquals(1, fill(h, "material", FillRate.ALL).conflicts());
     }
 
     @Test
