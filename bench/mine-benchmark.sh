@@ -4,7 +4,7 @@
 #   BENCH_SIZES="10000 100000" bench/mine-benchmark.sh
 # Environment: BENCH_SIZES, BENCH_FORMAT (jsonl | folder), BENCH_CORPORA (default bench/corpora,
 # git-ignored; an existing listings-N.jsonl or listings-N/ there is reused), BENCH_HEAP (default -Xmx2g),
-# BENCH_PEER_BUDGET (seconds a peer may be predicted to take before it is skipped, default 300),
+# BENCH_JAVA_OPTS (extra JVM flags), BENCH_PEER_BUDGET (seconds a peer may be predicted to take before it is skipped, default 300),
 # SHEAF_PYTHON (default /usr/bin/python3). See bench/README.md.
 set -euo pipefail
 ROOT="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
@@ -12,6 +12,8 @@ read -r -a SIZES <<< "${BENCH_SIZES:-10000 100000 1000000}"
 FORMAT="${BENCH_FORMAT:-jsonl}"
 CORPORA="${BENCH_CORPORA:-$ROOT/bench/corpora}"
 HEAP="${BENCH_HEAP:--Xmx2g}"
+# extra JVM flags for both Java rows, e.g. BENCH_JAVA_OPTS="-XX:+UseParallelGC" (default: none, as ./sheaf runs)
+read -r -a JOPTS <<< "${BENCH_JAVA_OPTS:-}"
 BUDGET="${BENCH_PEER_BUDGET:-300}"
 PY="${SHEAF_PYTHON:-/usr/bin/python3}"
 WORK="$(mktemp -d "${TMPDIR:-/tmp}/sheaf-bench.XXXXXX")"
@@ -86,13 +88,13 @@ for n in "${SIZES[@]}"; do
   fi
   # 2. analysis only: the same reading and Lucene analysis on the same threads, no counting
   if [ "$FORMAT" = jsonl ]; then
-    measure analysis "$n" "$bytes" "analysis only (Java)" java "$HEAP" -cp "$CP" dev.sheaf.miner.bench.BenchMain analysis-only "$f"
+    measure analysis "$n" "$bytes" "analysis only (Java)" java "$HEAP" ${JOPTS[@]+"${JOPTS[@]}"} -cp "$CP" dev.sheaf.miner.bench.BenchMain analysis-only "$f"
   fi
   # 3. the whole job
   if [ "$INGEST" = 1 ]; then
-    NOTE="./sheaf mine" measure sheaf "$n" "$bytes" "sheaf mine" env SHEAF_JAVA_OPTS="$HEAP" "$ROOT/sheaf" mine "$f" --out "$WORK/out-$n" --no-progress
+    NOTE="./sheaf mine" measure sheaf "$n" "$bytes" "sheaf mine" env SHEAF_JAVA_OPTS="$HEAP ${BENCH_JAVA_OPTS:-}" "$ROOT/sheaf" mine "$f" --out "$WORK/out-$n" --no-progress
   elif [ "$FORMAT" = jsonl ]; then
-    NOTE="Harvester + test JSONL reader" measure sheaf "$n" "$bytes" "sheaf mine" java "$HEAP" -cp "$CP" dev.sheaf.miner.bench.BenchMain mine "$f" "$WORK/out-$n"
+    NOTE="Harvester + test JSONL reader" measure sheaf "$n" "$bytes" "sheaf mine" java "$HEAP" ${JOPTS[@]+"${JOPTS[@]}"} -cp "$CP" dev.sheaf.miner.bench.BenchMain mine "$f" "$WORK/out-$n"
   else
     printf '%-9s %-24s %s\n' "$n" "sheaf mine" "skipped: folder corpora need the ingest stage"
   fi
@@ -125,7 +127,7 @@ for n in "${SIZES[@]}"; do
 done
 echo
 echo "targets: 100k: >= 10x NLTK and >= 5x CountVectorizer throughput; 1M: <= 45 s wall with $HEAP and <= 3x analysis-only"
-verdict() { awk -v c="$1" 'BEGIN { exit !(c) }' && echo "  PASS  $2" || echo "  MISS  $2"; }
+verdict() { if awk "BEGIN { exit !($1) }"; then echo "  PASS  $2"; else echo "  MISS  $2"; fi; }
 if [ -n "${WALL[sheaf:100000]:-}" ]; then
   [ -n "${WALL[nltk:100000]:-}" ] && verdict "${WALL[nltk:100000]} >= 10 * ${WALL[sheaf:100000]}" "100k: sheaf ${WALL[sheaf:100000]} s vs NLTK ${WALL[nltk:100000]} s"
   [ -n "${WALL[sklearn:100000]:-}" ] && verdict "${WALL[sklearn:100000]} >= 5 * ${WALL[sheaf:100000]}" "100k: sheaf ${WALL[sheaf:100000]} s vs CountVectorizer ${WALL[sklearn:100000]} s"
