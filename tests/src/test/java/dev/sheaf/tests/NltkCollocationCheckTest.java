@@ -5,10 +5,9 @@ import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assertions.fail;
 
-import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import dev.sheaf.miner.ingest.Field;
-import dev.sheaf.miner.ingest.FieldKind;
+import dev.sheaf.miner.ingest.Ingest;
+import dev.sheaf.miner.ingest.IngestSummary;
+import dev.sheaf.miner.ingest.Workspace;
 import dev.sheaf.miner.ingest.Listing;
 import dev.sheaf.miner.mine.Harvest;
 import dev.sheaf.miner.mine.HarvestOptions;
@@ -21,6 +20,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Collections;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
@@ -45,13 +45,11 @@ import org.junit.jupiter.api.io.TempDir;
  */
 class NltkCollocationCheckTest {
     /**
-     * The corpus. Until the ingest stage is merged this is a fixture in the generator's JSONL shape;
-     * then switch it to {@code Path.of("../sample-listings/catalog")} and replace {@link #listings()}'s
-     * body with: {@code List<Listing> out = Collections.synchronizedList(new ArrayList<>());
-     * Ingest.builder().source(new SourceSpec(CORPUS, List.of("**&#47;*"), List.of(), null)).build().run(out::add);
-     * return out;} (the order of listings does not matter to counts).
+     * The corpus: the demo workspace's catalog (sample-listings/catalog, every format, with the CSV
+     * feed's column mapping), read by the real ingest stage exactly as
+     * {@code sheaf mine --workspace sample-listings} reads it.
      */
-    static final Path CORPUS = Path.of("src/test/resources/reference/outdoor-catalog.jsonl");
+    static final Path WORKSPACE = Path.of("../sample-listings");
     static final int MIN_FREQUENCY = 5;
     private static final double REL = 1e-9;
     private static final double EPS = Math.ulp(1.0);
@@ -189,25 +187,12 @@ class NltkCollocationCheckTest {
         }
     }
 
-    /** The corpus's listings (see {@link #CORPUS}); a minimal reader of the generator's JSONL shape. */
+    /** The corpus's listings through the ingest stage (the order of listings does not matter to counts). */
     static List<Listing> listings() throws IOException {
-        ObjectMapper m = new ObjectMapper();
-        List<Listing> out = new ArrayList<>();
-        int line = 0;
-        for (String s : Files.readAllLines(CORPUS, StandardCharsets.UTF_8)) {
-            line++;
-            if (s.isBlank()) {
-                continue;
-            }
-            JsonNode n = m.readTree(s);
-            List<Field> fields = new ArrayList<>();
-            fields.add(Field.of(FieldKind.TITLE, n.path("title").asText("")));
-            fields.add(Field.of(FieldKind.DESCRIPTION, n.path("description").asText("")));
-            n.path("bullets").forEach(b -> fields.add(Field.of(FieldKind.BULLET, b.asText())));
-            n.path("specs").fields().forEachRemaining(e -> fields.add(Field.spec(e.getKey(), e.getValue().asText())));
-            out.add(new Listing(n.path("id").asText(), n.path("category").asText(""), CORPUS.getFileName().toString(),
-                    "line " + line, fields));
-        }
+        List<Listing> out = Collections.synchronizedList(new ArrayList<>());
+        Workspace ws = Workspace.load(WORKSPACE);
+        IngestSummary r = Ingest.builder().sources(ws.sources()).workspaceRoot(WORKSPACE).build().run(out::add);
+        assertTrue(r.problems().isEmpty(), "the demo catalog must read without problems, got " + r.problems());
         return out;
     }
 }

@@ -159,11 +159,17 @@ final class DecodingReader extends Reader {
         if (firstMalformedByte >= 0) {
             return;
         }
-        for (int i = from; i < chars.position(); i++) {
-            if (chars.get(i) == '\n') {
-                newlines++;
+        // straight over the backing array: this runs once per decoded char of every text source
+        char[] a = chars.array();
+        int base = chars.arrayOffset();
+        int end = base + chars.position();
+        long n = 0;
+        for (int i = base + from; i < end; i++) {
+            if (a[i] == '\n') {
+                n++;
             }
         }
+        newlines += n;
     }
 
     @Override

@@ -32,6 +32,15 @@ public record HarvestOptions(int ngramMax, int minFrequency, int minDf, double m
     public static final int DEFAULT_TOP_CATEGORIES = 3;
     public static final double DEFAULT_PRIOR_SHARE = 0.01;
     public static final int DEFAULT_SPEC_VALUES = 25;
+    /**
+     * Site-template text (decision 049): with a df-share cap below 1, a term found in more than this
+     * share of the listings of one kind of source file is dropped, when that kind holds at least
+     * {@link #TEMPLATE_MIN_LISTINGS} listings and the corpus has other kinds too — page chrome such as
+     * a shop name or "SKU" line on every HTML page, below the corpus-wide cap only because other
+     * feeds lack it. [practice]
+     */
+    public static final double TEMPLATE_SHARE = 0.9;
+    public static final int TEMPLATE_MIN_LISTINGS = 50;
 
     public HarvestOptions {
         Objects.requireNonNull(rankBy, "rankBy");

@@ -321,7 +321,7 @@ final class MineJob {
             }
             progress.phase("scoring");
             Scoring scoring = new Scoring(this);
-            int[] selected = scoring.select();
+            int[] selected = scoring.select(this::siteTemplate);
             progress.phase("evidence");
             FinalPass fin = finalPass(scoring, selected);
             progress.phase("writing");
@@ -469,8 +469,14 @@ final class MineJob {
 
         // ---------------------------------------------------------------- final pass
 
-        private FinalPass finalPass(Scoring scoring, int[] selected) throws InterruptedException {
-            int cands = selected.length;
+        /**
+         * Candidates numbered 0..n-1 by (level, index): per level, index → candidate (-1: none),
+         * plus per first token the longest candidate starting with it.
+         */
+        private record CandidateMap(int[][] candOf, int[] reach) {
+        }
+
+        private CandidateMap candidateMap(int[] level, int[] index) {
             int[][] candOf = new int[maxN + 1][];
             candOf[1] = new int[vocab];
             Arrays.fill(candOf[1], -1);
@@ -478,35 +484,107 @@ final class MineJob {
                 candOf[m] = new int[levels[m].size];
                 Arrays.fill(candOf[m], -1);
             }
-            int[] candLevel = new int[cands];
             int[] reach = new int[vocab];
             int[] t = new int[HarvestOptions.MAX_NGRAM];
-            for (int c = 0; c < cands; c++) {
-                int p = selected[c];
-                int m = scoring.level(p);
-                candLevel[c] = m;
-                candOf[m][scoring.index(p)] = c;
-                tokensOf(m, scoring.index(p), t);
+            for (int c = 0; c < level.length; c++) {
+                int m = level[c];
+                candOf[m][index[c]] = c;
+                tokensOf(m, index[c], t);
                 reach[t[0]] = Math.max(reach[t[0]], m);
             }
-            int nCats = categoryNames.size();
+            return new CandidateMap(candOf, reach);
+        }
+
+        /** Per-listing df of the candidates by bucket (category, or source kind when bucketOfSource is given), with evidence when k > 0. */
+        private FinalPart bucketPass(CandidateMap map, int cands, int buckets, int[] bucketOfSource, int k)
+                throws InterruptedException {
             int[] rank = sourceRanks();
-            int k = options.evidence();
             List<FinalPart> parts = new ArrayList<>();
             List<Future<?>> futures = new ArrayList<>();
             for (AnalysisWorker w : workers) {
-                FinalPart part = new FinalPart(cands, nCats, k);
+                FinalPart part = new FinalPart(cands, buckets, k);
                 parts.add(part);
-                futures.add(pool.submit(() -> finalWorker(w, part, candOf, reach, rank)));
+                futures.add(pool.submit(() -> finalWorker(w, part, map.candOf(), map.reach(), rank, bucketOfSource)));
             }
             await(futures);
             FinalPart total = parts.get(0);
             for (int i = 1; i < parts.size(); i++) {
                 total.mergeFrom(parts.get(i));
             }
+            return total;
+        }
+
+        /**
+         * Site-template text (decision 049): for survivors given by level and index, true where the
+         * term is in more than {@link HarvestOptions#TEMPLATE_SHARE} of the listings of one kind of
+         * source file (by extension) that holds at least {@link HarvestOptions#TEMPLATE_MIN_LISTINGS}
+         * listings, while the corpus also holds listings from other kinds. Null when no kind
+         * qualifies (one kind only: its share is the df share, already capped).
+         */
+        boolean[] siteTemplate(int[] level, int[] index) throws InterruptedException {
+            String[] names = sourceNames.toArray(new String[0]);
+            List<String> kinds = new ArrayList<>();
+            int[] kindOf = new int[names.length];
+            for (int i = 0; i < names.length; i++) {
+                String kind = sourceKind(names[i]);
+                int at = kinds.indexOf(kind);
+                if (at < 0) {
+                    kinds.add(kind);
+                    at = kinds.size() - 1;
+                }
+                kindOf[i] = at;
+            }
+            if (kinds.size() < 2 || options.maxDfShare() >= 1) {
+                return null;
+            }
+            long[] kindListings = new long[kinds.size()];
+            for (AnalysisWorker w : workers) {
+                for (int i = 0; i < w.order.size(); i++) {
+                    kindListings[kindOf[(int) (w.order.getLong(i) >>> 32)]]++;
+                }
+            }
+            boolean any = false;
+            for (long n : kindListings) {
+                any |= n >= HarvestOptions.TEMPLATE_MIN_LISTINGS;
+            }
+            if (!any || level.length == 0) {
+                return null;
+            }
+            FinalPart df = bucketPass(candidateMap(level, index), level.length, kinds.size(), kindOf, 0);
+            boolean[] drop = new boolean[level.length];
+            for (int c = 0; c < level.length; c++) {
+                for (int g = 0; g < kindListings.length; g++) {
+                    if (kindListings[g] >= HarvestOptions.TEMPLATE_MIN_LISTINGS
+                            && df.categoryDf(c, g) > HarvestOptions.TEMPLATE_SHARE * kindListings[g]) {
+                        drop[c] = true;
+                        break;
+                    }
+                }
+            }
+            return drop;
+        }
+
+        private FinalPass finalPass(Scoring scoring, int[] selected) throws InterruptedException {
+            int cands = selected.length;
+            int[] candLevel = new int[cands];
+            int[] candIndex = new int[cands];
+            for (int c = 0; c < cands; c++) {
+                candLevel[c] = scoring.level(selected[c]);
+                candIndex[c] = scoring.index(selected[c]);
+            }
+            int nCats = categoryNames.size();
+            int k = options.evidence();
+            FinalPart total = bucketPass(candidateMap(candLevel, candIndex), cands, nCats, null, k);
             progress.phase("evidence lines");
             dev.sheaf.miner.text.EvidenceLine[][] lines = evidenceLines(total, candLevel, k);
             return new FinalPass(total, lines, categoryNames.toArray(new String[0]), categoryListings());
+        }
+
+        /** The kind of a source file: its extension, lower-cased ("html", "jsonl"); "" when it has none. */
+        private static String sourceKind(String name) {
+            int slash = Math.max(name.lastIndexOf('/'), name.lastIndexOf('\\'));
+            int dot = name.lastIndexOf('.');
+            return dot > slash + 1 ? name.substring(dot + 1).toLowerCase(java.util.Locale.ROOT) : "";
         }
 
         private long[] categoryListings() {
@@ -533,12 +611,12 @@ final class MineJob {
             return rank;
         }
 
-        private void finalWorker(AnalysisWorker w, FinalPart part, int[][] candOf, int[] reach, int[] rank) {
+        private void finalWorker(AnalysisWorker w, FinalPart part, int[][] candOf, int[] reach, int[] rank, int[] bucketOfSource) {
             int[] lastStamp = new int[part.cands];
             w.store.forEach((index, sym, len) -> {
                 int stamp = index + 1;
-                int cat = w.categories.getInt(index);
                 long ord = w.order.getLong(index);
+                int cat = bucketOfSource == null ? w.categories.getInt(index) : bucketOfSource[(int) (ord >>> 32)];
                 long key = ((long) rank[(int) (ord >>> 32)] << 32) | (ord & 0xFFFFFFFFL);
                 int end = 0;
                 for (int j = 0; j < len; j++) {

@@ -85,11 +85,17 @@ final class Scoring {
 
     // ------------------------------------------------------------------ selection
 
+    /** Finds the survivors (by level and index) that are site-template text; null when none can be. */
+    interface TemplateCheck {
+        boolean[] find(int[] level, int[] index) throws InterruptedException;
+    }
+
     /** Returns the selected survivors (indices into the survivor list) in rank order. */
-    int[] select() {
+    int[] select(TemplateCheck template) throws InterruptedException {
         buildPool();
         nest();
         filter();
+        dropTemplate(template);
         int limit = o.limit() == 0 ? survivors : Math.min(o.limit(), survivors);
         int[] chosen;
         if (limit == survivors) {
@@ -193,6 +199,30 @@ final class Scoring {
                 }
             }
         }
+    }
+
+    /** Removes the survivors the check marks, keeping the others in order. */
+    private void dropTemplate(TemplateCheck template) throws InterruptedException {
+        int[] lv = new int[survivors];
+        int[] ix = new int[survivors];
+        for (int s = 0; s < survivors; s++) {
+            lv[s] = pLevel[survivor[s]];
+            ix[s] = pIdx[survivor[s]];
+        }
+        boolean[] drop = template.find(lv, ix);
+        if (drop == null) {
+            return;
+        }
+        int kept = 0;
+        for (int s = 0; s < survivors; s++) {
+            if (!drop[s]) {
+                survivor[kept] = survivor[s];
+                rankScore[kept] = rankScore[s];
+                kept++;
+            }
+        }
+        survivors = kept;
+        termCache = new String[kept];
     }
 
     private void filter() {

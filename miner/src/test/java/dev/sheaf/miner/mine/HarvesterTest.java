@@ -192,6 +192,34 @@ class HarvesterTest {
         }
     }
 
+    /** Decision 049: text on (nearly) every page of one kind of source is site template, dropped below the df cap. */
+    @Test
+    void siteTemplateOfOneKindOfSourceIsDroppedButAttributesStay() {
+        List<Listing> listings = new ArrayList<>();
+        for (int i = 0; i < 60; i++) { // 60 pages, each its own file, each with the shop's footer
+            listings.add(new Listing("p" + i, "tents", "site/p" + i + ".html", "",
+                    List.of(Field.of(FieldKind.TITLE, (i % 2 == 0 ? "ripstop nylon tent " : "cotton canvas tent ") + i),
+                            Field.of(FieldKind.TEXT, "copyright hollowmere traders"))));
+        }
+        for (int i = 0; i < 70; i++) { // one feed without the footer
+            listings.add(new Listing("f" + i, "tents", "feed.jsonl", "line " + (i + 1),
+                    List.of(Field.of(FieldKind.TITLE, (i % 2 == 0 ? "ripstop nylon shelter" : "mesh inner shelter")))));
+        }
+        HarvestOptions o = HarvestOptions.builder().minFrequency(2).minDf(2).limit(0).build();
+        Set<String> terms = mine(listings, o, 2, 256L << 20).candidates().stream().map(Harvest.Candidate::term)
+                .collect(Collectors.toSet());
+        // 60 of 130 listings is under the 0.5 cap, but 60 of 60 HTML pages is template
+        assertFalse(terms.contains("hollowmere traders"), "site template kept: " + terms);
+        assertFalse(terms.contains("copyright"), "site template kept: " + terms);
+        // an attribute on half the pages stays, and so does one on most listings of the whole corpus
+        assertTrue(terms.contains("cotton canvas"), terms.toString());
+        assertTrue(terms.contains("ripstop nylon"), terms.toString());
+        // with the cap off (share 1) nothing is dropped as template either
+        Set<String> all = mine(listings, HarvestOptions.builder().minFrequency(2).minDf(2).limit(0).maxDfShare(1).build(), 1,
+                256L << 20).candidates().stream().map(Harvest.Candidate::term).collect(Collectors.toSet());
+        assertTrue(all.contains("hollowmere traders"), all.toString());
+    }
+
     @Test
     void evidenceLinesAreTheFirstListingsInSourceOrderWithExactOffsets() {
         Harvest h = mine(CATALOG, HarvestOptions.builder().minFrequency(2).minDf(1).limit(200).evidence(3).build(), 2, 256L << 20);
