@@ -55,7 +55,8 @@ warmup() {
   local f="$1" w="$WORK/warm"
   rm -rf "$w"; mkdir -p "$w"
   if [ -d "$f" ]; then
-    find "$f" -type f | sort | head -n 200 | while read -r x; do cp "$x" "$w/"; done
+    local files; mapfile -t files < <(find "$f" -type f | sort | head -n 200) # not a pipeline: head's early exit is no failure
+    cp "${files[@]}" "$w/"
   else
     head -n 1000 "$f" > "$w/warm.jsonl"
   fi
