@@ -48,7 +48,8 @@ public final class CuratorApp extends Application {
 
     /** Puts the view in the stage with the close guard (unsaved edits are asked about). */
     public static void show(Stage stage, MainView view, MainViewModel vm) {
-        Scene scene = new Scene(view.node(), 1360, 820);
+        javafx.geometry.Rectangle2D screen = javafx.stage.Screen.getPrimary().getVisualBounds();
+        Scene scene = new Scene(view.node(), Math.min(1360, screen.getWidth()), Math.min(820, screen.getHeight()));
         stage.setScene(scene);
         stage.titleProperty().bind(vm.titleProperty());
         stage.setMinWidth(900);
