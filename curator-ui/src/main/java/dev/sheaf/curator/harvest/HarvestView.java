@@ -157,7 +157,7 @@ public final class HarvestView {
         term.setCellValueFactory(c -> new ReadOnlyObjectWrapper<>(c.getValue().term()));
         term.setPrefWidth(180);
         table.getColumns().add(term);
-        table.getColumns().add(column("Words", 62, CandidateRow::words, Integer.class, true));
+        table.getColumns().add(column("Words", 58, CandidateRow::words, Integer.class, true));
         table.getColumns().add(column("Count", 62, CandidateRow::frequency, Long.class, true));
         table.getColumns().add(column("Listings", 66, CandidateRow::df, Long.class, true));
         TableColumn<CandidateRow, Double> score = column("Score", 62, CandidateRow::score, Double.class, true);
@@ -199,6 +199,7 @@ public final class HarvestView {
         TableColumn<CandidateRow, T> c = new TableColumn<>(name);
         c.setCellValueFactory(f -> new ReadOnlyObjectWrapper<>(value.apply(f.getValue())));
         c.setPrefWidth(width);
+        c.setMinWidth(width);
         c.getStyleClass().add("numeric");
         return c;
     }

@@ -199,4 +199,20 @@ class CuratorUiTest {
         shot(robot, "06-regulated-concept");
         robot.interact(() -> vm.closeSession());
     }
+
+    @Test
+    void minesAFreshWorkspaceInTheBackgroundWithProgressAndCancel(FxRobot robot) throws Exception {
+        Path ws = DemoWorkspace.fresh(tmp.resolve("fresh"));
+        robot.interact(() -> vm.open(ws));
+        waitUntil(() -> vm.session() != null && "Mining the harvest".equals(vm.background().titleProperty().get())
+                && !vm.background().detailProperty().get().isEmpty());
+        assertTrue(robot.lookup(".working").query().isVisible(), "the status bar shows the work with its progress");
+        shot(robot, "00-mining-in-the-background");
+        robot.clickOn("Cancel");
+        waitUntil(() -> !vm.background().runningProperty().get());
+        assertTrue(vm.statusProperty().get().contains("cancelled"), vm.statusProperty().get());
+        assertFalse(Files.exists(ws.resolve("out/harvest.json")), "a cancelled mine writes no harvest");
+        assertTrue(vm.session().harvest() == null);
+        robot.interact(() -> vm.closeSession());
+    }
 }
