@@ -61,7 +61,13 @@ class ArchitectureTest {
     void viewModelsNeverTouchTheSceneGraph() {
         noClasses().that().resideInAPackage("dev.sheaf.curator..").and().haveSimpleNameEndingWith("ViewModel")
                 .should().dependOnClassesThat().resideInAPackage("javafx.scene..")
-                .allowEmptyShould(true)
+                .check(sheaf);
+    }
+
+    @Test
+    void theCuratorSessionNeverTouchesTheSceneGraph() {
+        noClasses().that().resideInAPackage("dev.sheaf.curator.session..")
+                .should().dependOnClassesThat().resideInAPackage("javafx.scene..")
                 .check(sheaf);
     }
 

@@ -274,6 +274,27 @@ public final class EvidenceIndex implements Closeable {
         return List.copyOf(smallest);
     }
 
+    /**
+     * The listing with this id as it was indexed (id, category, source, locator and every field in
+     * reading order), or empty when no listing has it. With duplicate ids, the first one indexed.
+     */
+    public java.util.Optional<Listing> listing(String id) throws IOException {
+        Objects.requireNonNull(id, "id");
+        TopFieldDocs top = searcher.search(new org.apache.lucene.search.TermQuery(new org.apache.lucene.index.Term(ID, id)), 1,
+                new Sort(SortField.FIELD_DOC));
+        if (top.scoreDocs.length == 0) {
+            return java.util.Optional.empty();
+        }
+        Document doc = reader.storedFields().document(top.scoreDocs[0].doc);
+        String[] meta = split(doc.get(META), 4);
+        List<Field> fields = new ArrayList<>();
+        for (String packed : doc.getValues(FIELD)) {
+            String[] f = split(packed, 3);
+            fields.add(new Field(FieldKind.fromLabel(f[0]), f[1], f[2]));
+        }
+        return java.util.Optional.of(new Listing(meta[0], meta[1], meta[2], meta[3], fields));
+    }
+
     private long countDistinct(Query q) throws IOException {
         return searcher.count(q);
     }

@@ -47,6 +47,17 @@ class EvidenceIndexTest {
     }
 
     @Test
+    void givesBackAListingAsIndexed(@TempDir Path dir) throws IOException {
+        build(dir, LISTINGS);
+        try (EvidenceIndex ix = EvidenceIndex.open(dir, new StandardAnalyzer())) {
+            for (Listing l : LISTINGS) {
+                assertEquals(java.util.Optional.of(l), ix.listing(l.id()), "fields, kinds, keys and order as indexed");
+            }
+            assertEquals(java.util.Optional.empty(), ix.listing("FH-404"));
+        }
+    }
+
+    @Test
     void evidenceLinesPointAtTheExactSourceText(@TempDir Path dir) throws IOException {
         build(dir, LISTINGS);
         try (EvidenceIndex ix = EvidenceIndex.open(dir, new StandardAnalyzer())) {

@@ -1,0 +1,73 @@
+package dev.sheaf.curator.app;
+
+import dev.sheaf.curator.session.Background;
+import dev.sheaf.curator.session.RecentWorkspaces;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.concurrent.Executor;
+import java.util.concurrent.Executors;
+import javafx.application.Application;
+import javafx.application.Platform;
+import javafx.scene.Scene;
+import javafx.stage.Stage;
+
+/** The JavaFX application: one main window; opens the workspace named on the command line. */
+public final class CuratorApp extends Application {
+    private MainViewModel vm;
+
+    @Override
+    public void start(Stage stage) {
+        List<String> args = getParameters().getRaw();
+        vm = newViewModel(RecentWorkspaces.forUser());
+        MainView view = new MainView(vm);
+        installPanels(view, vm);
+        show(stage, view, vm);
+        if (!args.isEmpty()) {
+            vm.open(Path.of(args.get(0)));
+        }
+    }
+
+    /** The view-model with a background worker and an evidence-query worker, reporting on the JavaFX thread. */
+    public static MainViewModel newViewModel(RecentWorkspaces recent) {
+        Executor queries = Executors.newSingleThreadExecutor(r -> {
+            Thread t = new Thread(r, "sheaf-curator-evidence");
+            t.setDaemon(true);
+            return t;
+        });
+        return new MainViewModel(Background.withWorkerThread(Platform::runLater), queries, Platform::runLater, recent);
+    }
+
+    /**
+     * Where further panels join the window: the vocabulary tree goes in the centre
+     * ({@link MainView#setHierarchyView}), suggestions, checks and figures as side panels
+     * ({@link MainView#addSidePanel}); each follows {@link MainViewModel#sessionProperty()}.
+     */
+    public static void installPanels(MainView view, MainViewModel vm) {
+        // the default panels are built by MainView itself
+    }
+
+    /** Puts the view in the stage with the close guard (unsaved edits are asked about). */
+    public static void show(Stage stage, MainView view, MainViewModel vm) {
+        javafx.geometry.Rectangle2D screen = javafx.stage.Screen.getPrimary().getVisualBounds();
+        Scene scene = new Scene(view.node(), Math.min(1360, screen.getWidth()), Math.min(820, screen.getHeight()));
+        stage.setScene(scene);
+        stage.titleProperty().bind(vm.titleProperty());
+        stage.setMinWidth(900);
+        stage.setMinHeight(560);
+        stage.setOnCloseRequest(e -> {
+            if (!view.confirmClose()) {
+                e.consume();
+            } else {
+                vm.closeSession();
+            }
+        });
+        stage.show();
+    }
+
+    @Override
+    public void stop() {
+        if (vm != null) {
+            vm.closeSession();
+        }
+    }
+}
