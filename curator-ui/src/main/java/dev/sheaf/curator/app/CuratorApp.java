@@ -47,8 +47,9 @@ public final class CuratorApp extends Application {
         javafx.scene.control.SplitPane centre = new javafx.scene.control.SplitPane(
                 new dev.sheaf.curator.concepts.ConceptListView(vm.sessionProperty()).node(), p.hierarchy());
         centre.setOrientation(javafx.geometry.Orientation.VERTICAL);
-        centre.setDividerPositions(0.28);
+        centre.setDividerPositions(0.2);
         view.setHierarchyView(centre);
+        view.addSidePanel("Facet", p.facet());
         view.addSidePanel("Suggestions", p.suggestions());
         view.addSidePanel("Checks", p.checks());
         view.addSidePanel("Figures", p.figures());
@@ -56,7 +57,8 @@ public final class CuratorApp extends Application {
 
     /** Puts the view in the stage with the close guard (unsaved edits are asked about). */
     public static void show(Stage stage, MainView view, MainViewModel vm) {
-        Scene scene = new Scene(view.node(), 1360, 820);
+        javafx.geometry.Rectangle2D screen = javafx.stage.Screen.getPrimary().getVisualBounds();
+        Scene scene = new Scene(view.node(), Math.min(1360, screen.getWidth()), Math.min(820, screen.getHeight()));
         stage.setScene(scene);
         stage.titleProperty().bind(vm.titleProperty());
         stage.setMinWidth(900);

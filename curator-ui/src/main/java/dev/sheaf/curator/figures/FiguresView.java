@@ -50,15 +50,23 @@ public final class FiguresView extends VBox {
         GridPane grid = new GridPane();
         grid.setHgap(8);
         grid.setVgap(4);
-        grid.addRow(0, new Label("Listings covered"), covered);
+        grid.addRow(0, name("Listings covered"), covered);
         grid.add(perLabel, 1, 1);
-        grid.addRow(2, new Label("Facet fill rate"), fill);
+        grid.addRow(2, name("Facet fill rate"), fill);
         grid.add(byCategory, 1, 3);
-        grid.addRow(4, new Label("Flags"), flags);
+        grid.addRow(4, name("Flags"), flags);
 
         getChildren().addAll(new HBox(6, title, busy), caution, grid, status);
         vm.figuresProperty().addListener((o, a, f) -> show(f));
         show(vm.figuresProperty().get());
+    }
+
+    private static Label name(String text) {
+        Label l = new Label(text);
+        l.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
+        l.setAlignment(javafx.geometry.Pos.TOP_LEFT);
+        javafx.scene.layout.GridPane.setValignment(l, javafx.geometry.VPos.TOP);
+        return l;
     }
 
     private void show(ConceptFigures f) {

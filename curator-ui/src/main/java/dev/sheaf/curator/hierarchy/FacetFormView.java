@@ -30,6 +30,7 @@ public final class FacetFormView extends VBox {
         caution.setId("claim-caution");
         caution.getStyleClass().add("caution");
         caution.setWrapText(true);
+        caution.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
         caution.textProperty().bind(vm.cautionProperty());
         caution.visibleProperty().bind(vm.cautionProperty().isNotEmpty());
         caution.managedProperty().bind(caution.visibleProperty());
@@ -79,10 +80,13 @@ public final class FacetFormView extends VBox {
             }
         });
         Label unitLabel = new Label("Unit");
+        kind.setTooltip(new javafx.scene.control.Tooltip("What kind of value the facet takes"));
         unit.visibleProperty().bind(vm.valueKindProperty().isEqualTo(ValueKind.NUMBER));
         unitLabel.visibleProperty().bind(unit.visibleProperty());
 
-        CheckBox claim = new CheckBox("Regulated or safety claim (needs compliance review)");
+        CheckBox claim = new CheckBox("Regulated or safety claim");
+        claim.setTooltip(new javafx.scene.control.Tooltip("Values such as waterproof ratings, flame resistance, UV protection, "
+                + "child safety or fibre content: they need human and compliance review before they ship"));
         claim.setId("facet-regulated");
         claim.setWrapText(true);
         claim.selectedProperty().bindBidirectional(vm.regulatedProperty());
@@ -90,14 +94,24 @@ public final class FacetFormView extends VBox {
         GridPane grid = new GridPane();
         grid.setHgap(8);
         grid.setVgap(6);
-        grid.addRow(0, new Label("Values are"), kind);
+        Label kindLabel = new Label("Values");
+        Label catsLabel = new Label("Categories");
+        for (Label l : new Label[] {kindLabel, catsLabel, unitLabel}) {
+            l.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
+        }
+        kind.setMaxWidth(Double.MAX_VALUE);
+        javafx.scene.layout.GridPane.setHgrow(kind, javafx.scene.layout.Priority.ALWAYS);
+        javafx.scene.layout.GridPane.setHgrow(cats, javafx.scene.layout.Priority.ALWAYS);
+        grid.addRow(0, kindLabel, kind);
         grid.add(multi, 0, 1, 2, 1);
-        grid.addRow(2, new Label("Applies to"), cats);
+        grid.addRow(2, catsLabel, cats);
         grid.addRow(3, unitLabel, unit);
         grid.add(claim, 0, 4, 2, 1);
+        unitLabel.managedProperty().bind(unit.visibleProperty());
+        unit.managedProperty().bind(unit.visibleProperty());
         grid.disableProperty().bind(vm.availableProperty().not());
 
-        Label hint = new Label("Categories: comma-separated, as in the listings; empty means every category. Enter applies.");
+        Label hint = new Label("Categories: comma-separated; empty means every category; Enter applies.");
         hint.getStyleClass().add("key-hint");
         hint.setWrapText(true);
 

@@ -46,8 +46,8 @@ import javafx.scene.layout.VBox;
 public final class HierarchyView extends BorderPane {
     /** The stylesheet of the structure panels (hierarchy, suggestions, checks, figures). */
     public static final String STYLESHEET = "/dev/sheaf/curator/curator-structure.css";
-    static final String KEYS = "Drag to move · Ctrl+drop: also under · Alt+→ under the one above · Alt+← one level up"
-            + " · Ctrl+X, Ctrl+V move · F2 rename · Ctrl+N new concept · Ctrl+Shift+N new facet";
+    static final String KEYS = "Drag a row onto another to move it (hold Ctrl: also under) · Alt+→ / Alt+← indent / outdent"
+            + " · right-click for every move and its key";
 
     private final HierarchyViewModel vm;
     private final TreeView<TreeNode> tree = new TreeView<>();
@@ -57,6 +57,7 @@ public final class HierarchyView extends BorderPane {
     private final TextField name = new TextField();
     private Placed dragging;
     private boolean revealing;
+    private long lastUpdateNanos = -1;
 
     public HierarchyView(HierarchyViewModel vm) {
         this.vm = Objects.requireNonNull(vm);
@@ -89,7 +90,18 @@ public final class HierarchyView extends BorderPane {
         message.getStyleClass().add("status-message");
         message.textProperty().bind(vm.messageProperty());
         message.setWrapText(true);
-        VBox bottom = new VBox(2, message, hint);
+        Label caution = new Label("Regulated claim: labels mined from text are not verified product claims;"
+                + " they need human review and compliance review before they ship.");
+        caution.setId("hierarchy-caution");
+        caution.getStyleClass().add("caution");
+        caution.setWrapText(true);
+        caution.setMinHeight(Region.USE_PREF_SIZE);
+        caution.setTooltip(new Tooltip(Caution.REGULATED_CLAIM));
+        caution.setVisible(false);
+        caution.managedProperty().bind(caution.visibleProperty());
+        tree.getSelectionModel().selectedItemProperty().addListener((o, a, b) ->
+                caution.setVisible(b != null && b.getValue() != null && b.getValue().regulated()));
+        VBox bottom = new VBox(4, caution, message, hint);
         bottom.setPadding(new Insets(4, 6, 4, 6));
         setBottom(bottom);
     }
@@ -100,13 +112,13 @@ public final class HierarchyView extends BorderPane {
     }
 
     private ToolBar toolbar() {
-        Button facet = button("New facet", "Make a new facet (Ctrl+Shift+N)", vm::beginNewFacet);
+        Button facet = button("+ Facet", "Make a new facet (Ctrl+Shift+N)", vm::beginNewFacet);
         facet.setId("new-facet");
-        Button concept = button("New concept", "Add a concept under the selected row (Ctrl+N)", () -> vm.beginNewConcept(selected()));
+        Button concept = button("+ Concept", "Add a concept under the selected row (Ctrl+N)", () -> vm.beginNewConcept(selected()));
         Button rename = button("Rename", "Rename the selected row; the old name stays as an alternative label (F2)",
                 () -> vm.beginRename(selected()));
-        Button indent = button("Under the one above", "Put the selected concept under the row above it (Alt+→)", () -> vm.indent(selectedOrNone()));
-        Button outdent = button("One level up", "Take the selected concept one level up (Alt+←)", () -> vm.outdent(selectedOrNone()));
+        Button indent = button("Indent", "Put the selected concept under the row above it (Alt+→)", () -> vm.indent(selectedOrNone()));
+        Button outdent = button("Outdent", "Take the selected concept one level up (Alt+←)", () -> vm.outdent(selectedOrNone()));
         ToolBar bar = new ToolBar(facet, concept, rename, indent, outdent);
         bar.getStyleClass().add("hierarchy-toolbar");
         return bar;
@@ -291,27 +303,46 @@ public final class HierarchyView extends BorderPane {
         }
     }
 
-    /** Applies one change: refresh changed rows, then reconcile the child lists of changed parents. */
+    /**
+     * Applies one change: refresh changed rows, then reconcile the child lists of changed parents.
+     * While rows come and go the tree's own selection may jump to a neighbour; that is not the
+     * curator's choice, so it is not passed on, and the selected concept is shown again after.
+     */
     private void update(TreeChange change) {
-        for (String id : change.rows()) {
-            for (Row r : List.copyOf(rows.getOrDefault(id, List.of()))) {
-                vm.node(id, r.getValue().parent()).ifPresent(r::setValue);
-            }
-        }
-        for (String p : change.parents()) {
-            if (p.equals(HierarchyViewModel.TOP)) {
-                reconcile((Row) top);
-            } else {
-                for (Row r : List.copyOf(rows.getOrDefault(p, List.of()))) {
-                    reconcile(r);
+        long t0 = System.nanoTime();
+        String sel = vm.selected();
+        revealing = true;
+        try {
+            for (String id : change.rows()) {
+                for (Row r : List.copyOf(rows.getOrDefault(id, List.of()))) {
+                    vm.node(id, r.getValue().parent()).ifPresent(r::setValue);
                 }
             }
+            for (String p : change.parents()) {
+                if (p.equals(HierarchyViewModel.TOP)) {
+                    reconcile((Row) top);
+                } else {
+                    for (Row r : List.copyOf(rows.getOrDefault(p, List.of()))) {
+                        reconcile(r);
+                    }
+                }
+            }
+        } finally {
+            revealing = false;
         }
-        String sel = vm.selected();
-        TreeItem<TreeNode> cur = tree.getSelectionModel().getSelectedItem();
-        if (sel != null && (cur == null || cur.getValue() == null || !cur.getValue().id().equals(sel) || cur.getParent() == null)) {
+        if (sel != null && vm.node(sel, null).isEmpty()) {
+            // the selected concept is gone (an undone "new facet", a merge): select what the tree shows now
+            TreeItem<TreeNode> cur = tree.getSelectionModel().getSelectedItem();
+            vm.select(cur == null || cur.getValue() == null ? null : cur.getValue().id());
+        } else {
             reveal(sel);
         }
+        lastUpdateNanos = System.nanoTime() - t0;
+    }
+
+    /** How long the last change took to apply to the rows, in milliseconds (-1 before the first); printed by the UI test. */
+    public double lastUpdateMillis() {
+        return lastUpdateNanos < 0 ? -1 : lastUpdateNanos / 1e6;
     }
 
     /** Makes a loaded row's children match the view-model again, keeping the rows (and their open state) that stay. */

@@ -16,20 +16,20 @@ import java.util.List;
 import java.util.Objects;
 import java.util.function.Function;
 import javafx.beans.value.ObservableValue;
-import javafx.geometry.Orientation;
 import javafx.scene.Node;
 import javafx.scene.control.Label;
-import javafx.scene.control.SplitPane;
+import javafx.scene.control.ScrollPane;
 import javafx.scene.layout.StackPane;
 
 /**
- * The structure panels for the open session: the hierarchy with its facet form, and the
+ * The structure panels for the open session: the hierarchy, the facet form, and the
  * suggestions, checks and figures. Each panel is a {@link Slot} that makes its view-model and view
  * for each session the window opens, and lets go of the old ones (listeners, background runs,
  * index readers) when the session closes.
  */
 public final class StructurePanels {
     private final Slot hierarchy;
+    private final Slot facet;
     private final Slot suggestions;
     private final Slot checks;
     private final Slot figures;
@@ -37,11 +37,13 @@ public final class StructurePanels {
     public StructurePanels(ObservableValue<CuratorSession> session) {
         hierarchy = new Slot(session, s -> {
             HierarchyViewModel h = new HierarchyViewModel(s);
+            return new Built(new HierarchyView(h), List.of(h::dispose));
+        });
+        facet = new Slot(session, s -> {
             FacetFormViewModel f = new FacetFormViewModel(s);
-            SplitPane split = new SplitPane(new HierarchyView(h), new FacetFormView(f));
-            split.setOrientation(Orientation.VERTICAL);
-            split.setDividerPositions(0.66);
-            return new Built(split, List.of(h::dispose, f::dispose));
+            ScrollPane scroll = new ScrollPane(new FacetFormView(f));
+            scroll.setFitToWidth(true);
+            return new Built(scroll, List.of(f::dispose));
         });
         suggestions = new Slot(session, s -> {
             SuggestionsViewModel vm = new SuggestionsViewModel(s);
@@ -80,9 +82,14 @@ public final class StructurePanels {
         }
     }
 
-    /** The hierarchy tree above the facet form: the window's centre. */
+    /** The hierarchy tree: the window's centre. */
     public Node hierarchy() {
         return hierarchy.node;
+    }
+
+    /** The properties form of the selected facet, with the regulated-claim caution: a side panel. */
+    public Node facet() {
+        return facet.node;
     }
 
     public Node suggestions() {
