@@ -24,7 +24,7 @@ public final class ChecksView extends BorderPane {
         table.setId("checks-table");
         table.setItems(vm.rows());
         table.setPlaceholder(new Label("No findings"));
-        TableColumn<CheckRow, String> sev = column("Severity", 80, CheckRow::severityWord);
+        TableColumn<CheckRow, String> sev = column("Severity", 66, CheckRow::severityWord);
         sev.setCellFactory(c -> new TableCell<>() {
             @Override
             protected void updateItem(String s, boolean empty) {
@@ -36,8 +36,25 @@ public final class ChecksView extends BorderPane {
                 }
             }
         });
-        TableColumn<CheckRow, String> rule = column("Rule", 150, CheckRow::rule);
+        TableColumn<CheckRow, String> rule = column("Rule", 130, CheckRow::rule);
         TableColumn<CheckRow, String> msg = column("Message", 420, CheckRow::message);
+        // messages name concepts by label and id: wrap them rather than cut them off
+        msg.setCellFactory(c -> new TableCell<>() {
+            private final javafx.scene.text.Text text = new javafx.scene.text.Text();
+
+            {
+                text.wrappingWidthProperty().bind(msg.widthProperty().subtract(12));
+                text.getStyleClass().add("check-message");
+            }
+
+            @Override
+            protected void updateItem(String s, boolean empty) {
+                super.updateItem(s, empty);
+                setText(null);
+                text.setText(empty || s == null ? "" : s);
+                setGraphic(empty ? null : text);
+            }
+        });
         table.getColumns().add(sev);
         table.getColumns().add(rule);
         table.getColumns().add(msg);
@@ -47,7 +64,8 @@ public final class ChecksView extends BorderPane {
                 @Override
                 protected void updateItem(CheckRow item, boolean empty) {
                     super.updateItem(item, empty);
-                    setTooltip(empty || item == null || item.hint().isEmpty() ? null : new Tooltip("How to fix: " + item.hint()));
+                    setTooltip(empty || item == null ? null
+                            : new Tooltip(item.message() + (item.hint().isEmpty() ? "" : "\nHow to fix: " + item.hint())));
                 }
             };
             r.setOnMouseClicked(e -> {
@@ -69,9 +87,7 @@ public final class ChecksView extends BorderPane {
         summary.textProperty().bind(vm.summaryProperty());
         Label hint = new Label("Enter or double-click: show the concept in the tree");
         hint.getStyleClass().add("key-hint");
-        BorderPane head = new BorderPane();
-        head.setLeft(summary);
-        head.setRight(hint);
+        javafx.scene.layout.VBox head = new javafx.scene.layout.VBox(2, summary, hint);
         head.setPadding(new Insets(4, 6, 4, 6));
         setTop(head);
         setCenter(table);

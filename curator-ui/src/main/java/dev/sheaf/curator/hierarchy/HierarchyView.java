@@ -435,7 +435,7 @@ public final class HierarchyView extends BorderPane {
         private final Label label = new Label();
         private final Label note = new Label();
         private final Label tag = new Label();
-        private final Label claim = new Label("claim · review");
+        private final Label claim = new Label("claim");
         private final HBox box = new HBox(6, label, note, tag, claim);
 
         NodeCell() {

@@ -184,6 +184,9 @@ public final class HierarchyViewModel {
     }
 
     private void changed(CuratorSession.VocabularyChange c) {
+        if (c.action() != dev.sheaf.vocab.EditHistory.Action.DO) {
+            message.set(""); // the status bar says what was undone or redone; our last message is no longer true
+        }
         TreeChange t = diff(c.before(), c.after());
         if (!t.isEmpty()) {
             for (Consumer<TreeChange> l : listeners) {
