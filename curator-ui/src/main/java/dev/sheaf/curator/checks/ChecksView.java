@@ -55,6 +55,9 @@ public final class ChecksView extends BorderPane {
                 setGraphic(empty ? null : text);
             }
         });
+        sev.setMinWidth(62);
+        rule.setMinWidth(120);
+        msg.setMinWidth(160);
         table.getColumns().add(sev);
         table.getColumns().add(rule);
         table.getColumns().add(msg);
