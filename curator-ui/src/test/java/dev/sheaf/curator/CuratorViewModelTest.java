@@ -181,7 +181,7 @@ class CuratorViewModelTest {
         assertFalse(hv.shown().contains(r), "a decided term leaves the to-decide list");
         hv.stateProperty().set(StateFilter.DROPPED);
         assertEquals(List.of(r), List.copyOf(hv.shown()));
-        assertTrue(hv.summaryProperty().get().contains("1 dropped"), hv.summaryProperty().get());
+        assertTrue(hv.summaryProperty().get().contains("dropped 1 "), hv.summaryProperty().get());
         h.vm.closeSession();
     }
 

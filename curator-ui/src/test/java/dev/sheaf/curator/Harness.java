@@ -10,11 +10,11 @@ import java.util.ArrayList;
 import java.util.List;
 
 /** A main view-model that runs every job at once on the calling thread, with the notices it posted. */
-final class Harness {
+public final class Harness {
     final MainViewModel vm;
     final List<Notice> notices = new ArrayList<>();
 
-    Harness(Path config) {
+    public Harness(Path config) {
         vm = new MainViewModel(new Background(Runnable::run, Runnable::run), Runnable::run, Runnable::run,
                 new RecentWorkspaces(config.resolve(RecentWorkspaces.FILE_NAME)));
         vm.addNoticeListener(notices::add);

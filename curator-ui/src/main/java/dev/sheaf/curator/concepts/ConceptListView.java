@@ -30,6 +30,7 @@ public final class ConceptListView {
         root.setTop(top);
         ListView<ConceptListViewModel.Item> list = new ListView<>(vm.items());
         list.setId("concept-list");
+        list.setFixedCellSize(44);
         list.setCellFactory(l -> new ListCell<>() {
             @Override
             protected void updateItem(ConceptListViewModel.Item i, boolean empty) {

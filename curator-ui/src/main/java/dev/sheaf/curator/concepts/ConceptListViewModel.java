@@ -54,7 +54,9 @@ public final class ConceptListViewModel {
             Vocabulary v = session.vocabulary();
             String lang = v.defaultLanguage();
             for (Concept c : v.allConcepts()) {
-                String ctx = c.isFacet() ? "facet" : v.facetsOf(c.id()).stream().map(f -> f.displayLabel(lang))
+                String ctx = c.isFacet() ? String.format(Locale.ROOT, "facet · %,d value%s%s", v.valuesOf(c.id()).size(),
+                        v.valuesOf(c.id()).size() == 1 ? "" : "s",
+                        c.facet().regulatedClaim() ? " · regulated claim" : "") : v.facetsOf(c.id()).stream().map(f -> f.displayLabel(lang))
                         .collect(Collectors.joining(", "));
                 l.add(new Item(c.id(), c.displayLabel(lang), ctx.isEmpty() ? "not under a facet" : ctx, c.isFacet()));
             }

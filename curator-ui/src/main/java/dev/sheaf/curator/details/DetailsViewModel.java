@@ -120,7 +120,8 @@ public final class DetailsViewModel {
                     List<Concept> facets = v.facetsOf(id);
                     f.add(new Fact("Facet", facets.isEmpty() ? "none yet (not under a facet)"
                             : facets.stream().map(x -> x.displayLabel(lang)).collect(Collectors.joining(", "))));
-                    if (!c.broader().isEmpty()) {
+                    if (!c.broader().isEmpty() && !c.broader().equals(facets.stream().map(Concept::id)
+                            .collect(Collectors.toCollection(java.util.TreeSet::new)))) {
                         f.add(new Fact("Broader", c.broader().stream().map(v::displayLabel).collect(Collectors.joining(", "))));
                     }
                 } else {

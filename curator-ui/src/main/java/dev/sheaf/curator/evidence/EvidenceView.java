@@ -19,8 +19,6 @@ import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
-import javafx.scene.text.Text;
-import javafx.scene.text.TextFlow;
 
 /**
  * The evidence panel: keyword-in-context lines (the term stands out between its left and right
@@ -90,29 +88,52 @@ public final class EvidenceView {
         return list;
     }
 
+    /**
+     * One line in keyword-in-context layout: the left context right-aligned and cut at its start,
+     * the match in a column of its own, the right context cut at its end, so matches line up and
+     * the eye runs down one column; where it was found below.
+     */
     private static final class LineCell extends ListCell<EvidenceLine> {
+        private final Label left = new Label();
+        private final Label match = new Label();
+        private final Label right = new Label();
+        private final Label where = new Label();
+        private final VBox box;
+
+        LineCell() {
+            setPrefWidth(0);
+            left.getStyleClass().add("kwic-context");
+            left.setTextOverrun(javafx.scene.control.OverrunStyle.LEADING_ELLIPSIS);
+            left.setAlignment(javafx.geometry.Pos.CENTER_RIGHT);
+            match.getStyleClass().add("kwic-match");
+            match.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
+            right.getStyleClass().add("kwic-context");
+            right.setMinWidth(0);
+            HBox line = new HBox(5, left, match, right);
+            line.setAlignment(javafx.geometry.Pos.CENTER_LEFT);
+            left.prefWidthProperty().bind(widthProperty().multiply(0.36));
+            left.maxWidthProperty().bind(left.prefWidthProperty());
+            left.minWidthProperty().bind(left.prefWidthProperty());
+            right.setMaxWidth(Double.MAX_VALUE);
+            HBox.setHgrow(right, Priority.ALWAYS);
+            where.getStyleClass().add("kwic-source");
+            where.setMinWidth(0);
+            box = new VBox(1, line, where);
+        }
+
         @Override
         protected void updateItem(EvidenceLine e, boolean empty) {
             super.updateItem(e, empty);
+            setText(null);
             if (empty || e == null) {
                 setGraphic(null);
-                setText(null);
                 return;
             }
-            Text left = new Text(e.left().isEmpty() ? "" : "…" + e.left() + " ");
-            left.getStyleClass().add("kwic-context");
-            Text match = new Text(e.match());
-            match.getStyleClass().add("kwic-match");
-            Text right = new Text(e.right().isEmpty() ? "" : " " + e.right() + "…");
-            right.getStyleClass().add("kwic-context");
-            TextFlow line = new TextFlow(left, match, right);
-            line.setPrefWidth(0);
-            line.maxWidthProperty().bind(widthProperty().subtract(24));
-            Label where = new Label(e.listingId() + " · " + e.source() + (e.locator().isEmpty() ? "" : ", " + e.locator())
-                    + " · " + e.field() + (e.key().isEmpty() ? "" : " \"" + e.key() + "\""));
-            where.getStyleClass().add("kwic-source");
-            VBox box = new VBox(2, line, where);
-            setText(null);
+            left.setText(e.left());
+            match.setText(e.match());
+            right.setText(e.right());
+            where.setText(e.listingId() + " · " + e.field() + (e.key().isEmpty() ? "" : " \"" + e.key() + "\"") + " · "
+                    + e.source() + (e.locator().isEmpty() ? "" : ", " + e.locator()));
             setGraphic(box);
         }
     }

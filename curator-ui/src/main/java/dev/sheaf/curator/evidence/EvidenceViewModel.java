@@ -93,6 +93,7 @@ public final class EvidenceViewModel {
         String what = subject;
         searching.set(true);
         heading.set("Evidence for " + what);
+        note.set("Searching the listings…");
         worker.execute(() -> {
             List<EvidenceLine> found = new ArrayList<>();
             long listings = 0;

@@ -12,7 +12,6 @@ import javafx.geometry.Pos;
 import javafx.scene.control.Button;
 import javafx.scene.control.ComboBox;
 import javafx.scene.control.Label;
-import javafx.scene.control.ListCell;
 import javafx.scene.control.SelectionMode;
 import javafx.scene.control.TableCell;
 import javafx.scene.control.TableColumn;
@@ -109,8 +108,17 @@ public final class HarvestView {
         vm.wordsProperty().addListener((o, a, b) -> words.setValue(b.intValue()));
         ComboBox<String> category = new ComboBox<>(vm.categories());
         category.setId("harvest-category");
-        category.setButtonCell(categoryCell());
-        category.setCellFactory(l -> categoryCell());
+        category.setConverter(new StringConverter<>() {
+            @Override
+            public String toString(String c) {
+                return c == null || c.isEmpty() ? "Any category" : c;
+            }
+
+            @Override
+            public String fromString(String s) {
+                return s;
+            }
+        });
         category.valueProperty().bindBidirectional(vm.categoryProperty());
         category.setPrefWidth(150);
         TextField minScore = number("min score", vm.minScoreProperty().get());
@@ -137,34 +145,27 @@ public final class HarvestView {
         return f;
     }
 
-    private static ListCell<String> categoryCell() {
-        return new ListCell<>() {
-            @Override
-            protected void updateItem(String s, boolean empty) {
-                super.updateItem(s, empty);
-                setText(empty || s == null ? null : s.isEmpty() ? "Any category" : s);
-            }
-        };
-    }
-
     private TableView<CandidateRow> buildTable() {
         table.setId("harvest-table");
         table.getSelectionModel().setSelectionMode(SelectionMode.MULTIPLE);
+        // A fixed row height lets the virtual flow skip measuring rows when the filter changes the
+        // item count: with 20,000 candidates that measuring, not the filter, was most of a keystroke.
+        table.setFixedCellSize(24);
         table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
-        table.getColumns().add(column("#", 48, r -> r.rank(), Integer.class, false));
+        table.getColumns().add(column("#", 54, r -> r.rank(), Integer.class, false));
         TableColumn<CandidateRow, String> term = new TableColumn<>("Term");
         term.setCellValueFactory(c -> new ReadOnlyObjectWrapper<>(c.getValue().term()));
-        term.setPrefWidth(190);
+        term.setPrefWidth(180);
         table.getColumns().add(term);
-        table.getColumns().add(column("Words", 54, CandidateRow::words, Integer.class, true));
-        table.getColumns().add(column("Count", 66, CandidateRow::frequency, Long.class, true));
-        table.getColumns().add(column("Listings", 70, CandidateRow::df, Long.class, true));
-        TableColumn<CandidateRow, Double> score = column("Score", 64, CandidateRow::score, Double.class, true);
+        table.getColumns().add(column("Words", 58, CandidateRow::words, Integer.class, true));
+        table.getColumns().add(column("Count", 62, CandidateRow::frequency, Long.class, true));
+        table.getColumns().add(column("Listings", 66, CandidateRow::df, Long.class, true));
+        TableColumn<CandidateRow, Double> score = column("Score", 62, CandidateRow::score, Double.class, true);
         score.setCellFactory(c -> new TableCell<>() {
             @Override
             protected void updateItem(Double d, boolean empty) {
                 super.updateItem(d, empty);
-                setText(empty || d == null ? null : d.isNaN() ? "—" : String.format(Locale.ROOT, "%.2f", d));
+                setText(empty || d == null ? null : d.isNaN() ? "—" : d >= 100 ? String.format(Locale.ROOT, "%.0f", d) : String.format(Locale.ROOT, "%.2f", d));
             }
         });
         score.getStyleClass().add("numeric");
@@ -198,6 +199,7 @@ public final class HarvestView {
         TableColumn<CandidateRow, T> c = new TableColumn<>(name);
         c.setCellValueFactory(f -> new ReadOnlyObjectWrapper<>(value.apply(f.getValue())));
         c.setPrefWidth(width);
+        c.setMinWidth(width);
         c.getStyleClass().add("numeric");
         return c;
     }
@@ -236,18 +238,15 @@ public final class HarvestView {
         }
     }
 
-    private HBox footer() {
+    private VBox footer() {
         Label summary = new Label();
         summary.setId("harvest-summary");
         summary.textProperty().bind(vm.summaryProperty());
         summary.getStyleClass().add("summary");
-        Region gap = new Region();
-        HBox.setHgrow(gap, Priority.ALWAYS);
-        Label keys = new Label("K keep · Shift+K as label · D drop · P park · U forget");
+        Label keys = new Label("Keys: K keep · Shift+K as a label of the selected concept · D drop · P park · U forget");
         keys.getStyleClass().add("keys-hint");
-        HBox box = new HBox(8, summary, gap, keys);
+        VBox box = new VBox(2, summary, keys);
         box.getStyleClass().add("pane-footer");
-        box.setAlignment(Pos.CENTER_LEFT);
         return box;
     }
 

@@ -192,7 +192,7 @@ public final class HarvestViewModel {
         for (CandidateRow r : rows) {
             n.merge(r.state(), 1, Integer::sum);
         }
-        summary.set(String.format(Locale.ROOT, "%,d shown of %,d · %,d to decide · %,d kept · %,d dropped · %,d parked · %,d in vocabulary",
+        summary.set(String.format(Locale.ROOT, "%,d of %,d shown · to decide %,d · kept %,d · dropped %,d · parked %,d · in vocabulary %,d",
                 filtered.size(), rows.size(), n.getOrDefault(DecisionState.UNDECIDED, 0), n.getOrDefault(DecisionState.KEPT, 0),
                 n.getOrDefault(DecisionState.DROPPED, 0), n.getOrDefault(DecisionState.PARKED, 0),
                 n.getOrDefault(DecisionState.IN_VOCABULARY, 0)));
@@ -205,16 +205,33 @@ public final class HarvestViewModel {
         updateSummary();
     }
 
+    /**
+     * Normalised forms of decision terms and labels, kept across refreshes: the texts barely change
+     * from one edit to the next, and normalising (NFKC, case, separators) is what a refresh would
+     * otherwise spend its time on with thousands of concepts. Bounded by the distinct texts seen.
+     */
+    private final Map<String, String> keys = new HashMap<>();
+
+    private String key(String text) {
+        return keys.computeIfAbsent(text, Terms::normalise);
+    }
+
     /** Each row's state from the vocabulary's decisions and labels. */
-    private static void states(List<CandidateRow> list, Vocabulary v) {
+    private void states(List<CandidateRow> list, Vocabulary v) {
         Map<String, Decision> decisions = new HashMap<>();
         for (Decision d : v.decisions()) {
-            decisions.put(d.key(), d);
+            decisions.put(key(d.term()), d);
         }
         Map<String, String> labelled = new HashMap<>();
         for (Concept c : v.allConcepts()) {
-            for (ConceptLabel l : c.labels()) {
-                labelled.putIfAbsent(Terms.normalise(l.text()), c.id());
+            for (String p : c.prefLabels().values()) {
+                labelled.putIfAbsent(key(p), c.id());
+            }
+            for (Label l : c.altLabels()) {
+                labelled.putIfAbsent(key(l.text()), c.id());
+            }
+            for (Label l : c.hiddenLabels()) {
+                labelled.putIfAbsent(key(l.text()), c.id());
             }
         }
         for (CandidateRow r : list) {
