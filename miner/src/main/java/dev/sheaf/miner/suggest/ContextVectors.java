@@ -24,15 +24,17 @@ import java.util.Map;
 final class ContextVectors {
     static final double ALPHA = 0.75;
     static final int MAX_FEATURE_SPREAD = 2000;
-    static final int NEIGHBOURS = 5;
+    static final int NEIGHBOURS = 3;
     /** Occurrences with a context a candidate needs before its vector means anything. */
     static final int MIN_CONTEXTS = 5;
+    /** Context tokens counted at which a cosine is trusted fully. */
+    static final int FULL_CONTEXTS = 40;
 
     private ContextVectors() {
     }
 
     /** Sparse PPMI vectors: for each candidate with one, its features (sorted) and weights; null rows have none. */
-    record Vectors(int[][] features, double[][] weights, double[] norms) {
+    record Vectors(int[][] features, double[][] weights, double[] norms, double[] contexts) {
     }
 
     static Vectors vectors(int candidates, Corpus.Result corpus) {
@@ -105,7 +107,7 @@ final class ContextVectors {
             }
             norms[c] = Math.sqrt(s);
         }
-        return new Vectors(features, weights, norms);
+        return new Vectors(features, weights, norms, rowSum);
     }
 
     /** Cosine of every pair of vectors that share a feature, as neighbour lists (best first). */
@@ -154,13 +156,34 @@ final class ContextVectors {
         return out;
     }
 
+    /** Cosine of two candidates' vectors; 0 when either has none. */
+    static double cosine(Vectors v, int a, int b) {
+        int[] fa = v.features()[a];
+        int[] fb = v.features()[b];
+        if (fa == null || fb == null) {
+            return 0;
+        }
+        double dot = 0;
+        int i = 0;
+        int j = 0;
+        while (i < fa.length && j < fb.length) {
+            if (fa[i] < fb[j]) {
+                i++;
+            } else if (fa[i] > fb[j]) {
+                j++;
+            } else {
+                dot += v.weights()[a][i++] * v.weights()[b][j++];
+            }
+        }
+        return dot / (v.norms()[a] * v.norms()[b]);
+    }
+
     private static double weightOf(Vectors v, int c, int feature) {
         int k = Arrays.binarySearch(v.features()[c], feature);
         return k < 0 ? 0 : v.weights()[c][k];
     }
 
-    static int run(Catalog c, Corpus.Result corpus, SuggestOptions o, Proposals p) {
-        Vectors v = vectors(c.size(), corpus);
+    static int run(Catalog c, Corpus.Result corpus, Vectors v, SuggestOptions o, Proposals p) {
         for (int i = 0; i < c.size(); i++) {
             if (v.features()[i] != null) {
                 int[] f = v.features()[i];
@@ -179,7 +202,7 @@ final class ContextVectors {
             nb.add(new ArrayList<>());
         }
         for (int[] pr : pairs) {
-            if (related(c, pr[0], pr[1])) {
+            if (related(c, pr[0], pr[1]) || siblings(c, pr[0], pr[1])) {
                 continue;
             }
             nb.get(pr[0]).add(pr);
@@ -198,10 +221,12 @@ final class ContextVectors {
         int n = 0;
         for (int[] pr : pairs) {
             long key = ((long) pr[0] << 32) | pr[1];
-            if (related(c, pr[0], pr[1]) || !top.contains(key) || !mutual(nb, pr)) {
+            if (related(c, pr[0], pr[1]) || siblings(c, pr[0], pr[1]) || !top.contains(key) || !mutual(nb, pr)) {
                 continue;
             }
             double cos = pr[2] / 1e6;
+            // a cosine over a handful of contexts says little: trust it in proportion to the thinner vector, up to FULL_CONTEXTS
+            double trust = Math.min(1, Math.min(v.contexts()[pr[0]], v.contexts()[pr[1]]) / (double) FULL_CONTEXTS);
             long together = intersect(docs[pr[0]], docs[pr[1]]);
             Map<String, Double> fig = new LinkedHashMap<>();
             fig.put("cosine", cos);
@@ -209,7 +234,7 @@ final class ContextVectors {
             String why = String.format(Locale.ROOT, "used in the same contexts (PPMI cosine %.2f over %d and %d context tokens); in %d listing%s together",
                     cos, v.features()[pr[0]].length, v.features()[pr[1]].length, together, together == 1 ? "" : "s");
             p.addPair(Kinds.term(c, pr[0]), Kinds.term(c, pr[1]), new Suggestion.Support(Suggestion.Kind.DISTRIBUTIONAL,
-                    Kinds.clamp(0.85 * cos), why, fig), null);
+                    Kinds.clamp(0.75 * cos * trust), why, fig), null);
             n++;
         }
         return n;
@@ -229,6 +254,23 @@ final class ContextVectors {
     }
 
     /** Same group key, or one term's words inside the other's (a narrower term, not a synonym). */
+    /**
+     * Pairs the distributional kind leaves out: terms with digits (sizes, ratings: "8,500 btu" and
+     * "10,600 btu" share every context and are different values).
+     */
+    static boolean siblings(Catalog c, int a, int b) {
+        return hasDigit(c.terms[a]) || hasDigit(c.terms[b]);
+    }
+
+    private static boolean hasDigit(String s) {
+        for (int i = 0; i < s.length(); i++) {
+            if (Character.isDigit(s.charAt(i))) {
+                return true;
+            }
+        }
+        return false;
+    }
+
     static boolean related(Catalog c, int a, int b) {
         if (c.groupKeys[a] != null && c.groupKeys[a].equals(c.groupKeys[b])) {
             return true;

@@ -21,7 +21,7 @@ import java.util.concurrent.ConcurrentLinkedQueue;
 /**
  * One pass over the listings for the kinds that need the text itself: which candidates each
  * listing holds (listing-level co-occurrence), the tokens around each occurrence of a frequent
- * candidate inside its segment (context vectors), and abbreviations spelled out in the text.
+ * candidate inside its field text, stop words left out (context vectors), and abbreviations spelled out in the text.
  * Candidates are found in the segments the miner counts in, with the harvest's own analysis, so an
  * occurrence here is an occurrence there. Listings may be fed from several threads; each thread
  * counts on its own and {@link #finish()} adds the counts up (the result does not depend on timing).
@@ -156,10 +156,27 @@ final class Corpus {
             Arrays.fill(tokenOf, -2);
         }
 
+        /** The tokens of the current field text (all its segments, in order) and where each segment starts. */
+        final IntArrayList fieldIds = new IntArrayList();
+        final IntArrayList segStarts = new IntArrayList();
+        int currentField = -1;
+
         void add(Listing l) {
             listings++;
             inListing.clear();
-            segmenter.analyze(l, (field, part, ids, starts, ends, length) -> segment(ids, length));
+            currentField = -1;
+            segmenter.analyze(l, (field, part, ids, starts, ends, length) -> {
+                int key = field * 3 + part.ordinal();
+                if (key != currentField) {
+                    flushField();
+                    currentField = key;
+                }
+                segStarts.add(fieldIds.size());
+                for (int i = 0; i < length; i++) {
+                    fieldIds.add(ids[i]);
+                }
+            });
+            flushField();
             int[] d = inListing.toIntArray();
             Arrays.sort(d);
             docIds.add(l.id() + "\u0000" + l.source() + "\u0000" + l.locator());
@@ -203,40 +220,58 @@ final class Corpus {
             return t;
         }
 
-        private void segment(int[] ids, int length) {
-            if (toks.length < length) {
-                toks = new int[length * 2];
+        /**
+         * Finds candidates inside each segment of the buffered field text (an n-gram never crosses a
+         * segment) and counts, for frequent ones, the tokens up to {@code window} positions away on
+         * either side anywhere in the same field text: a removed stop word or a comma cuts an n-gram,
+         * but the words across it are still the term's context.
+         */
+        private void flushField() {
+            int total = fieldIds.size();
+            if (total == 0) {
+                segStarts.clear();
+                return;
             }
-            for (int i = 0; i < length; i++) {
+            int[] ids = fieldIds.elements();
+            if (toks.length < total) {
+                toks = new int[total * 2];
+            }
+            for (int i = 0; i < total; i++) {
                 toks[i] = token(ids[i]);
             }
             int maxN = catalog.maxN;
-            for (int i = 0; i < length; i++) {
-                int node = 0;
-                for (int j = i; j < length && j < i + maxN; j++) {
-                    int tok = toks[j];
-                    if (tok < 0) {
-                        break;
-                    }
-                    node = trie.get(((long) node << 32) | tok);
-                    if (node < 0) {
-                        break;
-                    }
-                    int c = nodeCandidate[node];
-                    if (c >= 0) {
-                        inListing.add(c);
-                        if (catalog.frequency[c] >= contextMin) {
-                            long base = (long) c << 32;
-                            for (int k = Math.max(0, i - window); k < i; k++) {
-                                contexts.addTo(base | (ids[k] * 2L), 1);
-                            }
-                            for (int k = j + 1; k < length && k <= j + window; k++) {
-                                contexts.addTo(base | (ids[k] * 2L + 1), 1);
+            for (int s = 0; s < segStarts.size(); s++) {
+                int from = segStarts.getInt(s);
+                int to = s + 1 < segStarts.size() ? segStarts.getInt(s + 1) : total;
+                for (int i = from; i < to; i++) {
+                    int node = 0;
+                    for (int j = i; j < to && j < i + maxN; j++) {
+                        int tok = toks[j];
+                        if (tok < 0) {
+                            break;
+                        }
+                        node = trie.get(((long) node << 32) | tok);
+                        if (node < 0) {
+                            break;
+                        }
+                        int c = nodeCandidate[node];
+                        if (c >= 0) {
+                            inListing.add(c);
+                            if (catalog.frequency[c] >= contextMin) {
+                                long base = (long) c << 32;
+                                for (int k = Math.max(0, i - window); k < i; k++) {
+                                    contexts.addTo(base | (ids[k] * 2L), 1);
+                                }
+                                for (int k = j + 1; k < total && k <= j + window; k++) {
+                                    contexts.addTo(base | (ids[k] * 2L + 1), 1);
+                                }
                             }
                         }
                     }
                 }
             }
+            fieldIds.clear();
+            segStarts.clear();
         }
     }
 }

@@ -2,7 +2,6 @@ package dev.sheaf.miner.suggest;
 
 import dev.sheaf.miner.ingest.EvidenceIndex;
 import dev.sheaf.miner.mine.Harvest;
-import it.unimi.dsi.fastutil.longs.Long2IntOpenHashMap;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
@@ -14,7 +13,7 @@ final class Hierarchy {
     /** Parents kept per child from subsumption, best first. */
     static final int PARENTS_PER_CHILD = 3;
     /** A spec facet with at least this share of distinct values per row is free text or ids, not a facet. */
-    static final double MAX_DISTINCT_SHARE = 0.8;
+    static final double MAX_DISTINCT_SHARE = 0.5;
     /** Spec rows a facet needs before it is proposed. */
     static final int MIN_FACET_ROWS = 10;
 
@@ -24,12 +23,15 @@ final class Hierarchy {
     static List<HierarchySuggestion> run(Catalog c, Corpus.Result corpus, SuggestOptions o,
                                          Map<HierarchySuggestion.Kind, Integer> found, List<String> notes, EvidenceIndex index) {
         List<HierarchySuggestion> out = new ArrayList<>();
+        Kinds.Timer time = new Kinds.Timer();
         if (o.hierarchyKinds().contains(HierarchySuggestion.Kind.FACET_VALUE)) {
             found.put(HierarchySuggestion.Kind.FACET_VALUE, facets(c, out, o, index));
         }
+        time.lap("facets");
         if (o.hierarchyKinds().contains(HierarchySuggestion.Kind.HEAD_MODIFIER)) {
             found.put(HierarchySuggestion.Kind.HEAD_MODIFIER, headModifier(c, out, o, index));
         }
+        time.lap("head-modifier");
         if (o.hierarchyKinds().contains(HierarchySuggestion.Kind.SUBSUMPTION)) {
             if (corpus == null) {
                 notes.add("subsumption: not run, it needs the listings (co-occurrence is counted per listing)");
@@ -37,6 +39,8 @@ final class Hierarchy {
                 found.put(HierarchySuggestion.Kind.SUBSUMPTION, subsumption(c, corpus, out, o, index));
             }
         }
+        time.lap("subsumption");
+        notes.add("time: " + time);
         return out;
     }
 
@@ -65,8 +69,8 @@ final class Hierarchy {
                     continue;
                 }
                 String form = c.formOf(v.value());
-                if (form == null || form.equals(f.name())) {
-                    continue;
+                if (form == null || form.equals(f.name()) || mostlyNumbers(form)) {
+                    continue; // "183 cm x 51 cm": a measurement, not a concept
                 }
                 double size = Math.min(1, f.rows() / (0.1 * c.listings));
                 double score = 0.5 + 0.25 * size + 0.2 * ((double) v.rows() / top);
@@ -113,8 +117,8 @@ final class Hierarchy {
                     continue;
                 }
                 String modifier = String.join(" ", Arrays.copyOfRange(t, 0, k));
-                double share = (double) c.df[i] / c.df[j];
-                double score = 0.6 + 0.3 * (1 - share);
+                // a child seen in many listings is a kind worth a concept; a number in the modifier is more often a value than a kind
+                double score = 0.55 + 0.35 * Math.min(1, Math.log1p(c.df[i]) / Math.log1p(50)) - (mostlyNumbers(modifier) ? 0.15 : 0);
                 String why = String.format(Locale.ROOT, "\"%s\" is \"%s\" with the modifier \"%s\" (same head word); %d of the %d listings with \"%s\" say \"%s\"",
                         c.shown[i], c.shown[j], modifier, c.df[i], c.df[j], c.terms[j], c.terms[i]);
                 out.add(new HierarchySuggestion(HierarchySuggestion.Kind.HEAD_MODIFIER, node(c, j), node(c, i), Kinds.clamp(score), why,
@@ -142,74 +146,82 @@ final class Hierarchy {
                 df[x]++;
             }
         }
-        boolean[] ok = new boolean[m];
+        boolean[] child = new boolean[m];
+        boolean[] parent = new boolean[m];
         for (int i = 0; i < m; i++) {
-            ok[i] = df[i] >= o.minHierarchyDf();
-        }
-        Long2IntOpenHashMap both = new Long2IntOpenHashMap();
-        int[] buf = new int[64];
-        for (int[] d : corpus.docs()) {
-            int k = 0;
-            for (int x : d) {
-                if (ok[x]) {
-                    if (k == buf.length) {
-                        buf = Arrays.copyOf(buf, k * 2);
-                    }
-                    buf[k++] = x;
-                }
-            }
-            for (int a = 0; a < k; a++) {
-                for (int b = a + 1; b < k; b++) {
-                    both.addTo(((long) buf[a] << 32) | buf[b], 1);
-                }
-            }
+            child[i] = df[i] >= o.minHierarchyDf() && !mostlyNumbers(c.terms[i]);
+            parent[i] = child[i] && (double) df[i] / listings <= o.maxParentDfShare();
         }
         double t = o.subsumption();
-        List<List<HierarchySuggestion>> perChild = new ArrayList<>(m);
-        for (int i = 0; i < m; i++) {
-            perChild.add(null);
-        }
-        long[] keys = both.keySet().toLongArray();
-        Arrays.sort(keys);
-        for (long key : keys) {
-            int a = (int) (key >>> 32);
-            int b = (int) key;
-            int n = both.get(key);
-            consider(c, a, b, n, df, listings, t, o, perChild);
-            consider(c, b, a, n, df, listings, t, o, perChild);
-        }
         int count = 0;
+        // for each child, count its co-occurring parents over its own listings: an array counter, no pair table
+        int[][] postings = ContextVectors.postings(m, corpus);
+        int[] both = new int[m];
+        int[] touched = new int[m];
         for (int y = 0; y < m; y++) {
-            List<HierarchySuggestion> l = perChild.get(y);
-            if (l == null) {
+            if (!child[y]) {
                 continue;
             }
-            l.sort((p, q) -> p.score() != q.score() ? Double.compare(q.score(), p.score()) : p.key().compareTo(q.key()));
-            for (int k = 0; k < Math.min(PARENTS_PER_CHILD, l.size()); k++) {
-                HierarchySuggestion h = l.get(k);
-                out.add(new HierarchySuggestion(h.kind(), h.parent(), h.child(), h.score(), h.reason(), h.counts(),
-                        Suggester.evidence(c, List.of(h.child().term()), List.of(), Math.min(1, o.evidenceLines()), index)));
+            int nt = 0;
+            for (int doc : postings[y]) {
+                for (int x : corpus.docs().get(doc)) {
+                    if (x != y && parent[x]) {
+                        if (both[x]++ == 0) {
+                            touched[nt++] = x;
+                        }
+                    }
+                }
+            }
+            Arrays.sort(touched, 0, nt);
+            List<double[]> best = new ArrayList<>();
+            for (int k = 0; k < nt; k++) {
+                int x = touched[k];
+                double score = score(c, x, y, both[x], df, t);
+                if (score > 0) {
+                    best.add(new double[] {score, x, both[x]});
+                }
+                both[x] = 0;
+            }
+            best.sort((p, q) -> p[0] != q[0] ? Double.compare(q[0], p[0]) : Double.compare(p[1], q[1]));
+            for (int k = 0; k < Math.min(PARENTS_PER_CHILD, best.size()); k++) {
+                int x = (int) best.get(k)[1];
+                int n = (int) best.get(k)[2];
+                double pxy = (double) n / df[y];
+                double pyx = (double) n / df[x];
+                String why = String.format(Locale.ROOT, "subsumption: %d of the %d listings with \"%s\" also have \"%s\" (P = %.2f ≥ %.2f), "
+                        + "but only %d of its %d do (P = %.2f)", n, df[y], c.terms[y], c.terms[x], pxy, t, n, df[x], pyx);
+                out.add(new HierarchySuggestion(HierarchySuggestion.Kind.SUBSUMPTION, node(c, x), node(c, y), best.get(k)[0], why,
+                        new HierarchySuggestion.Counts(df[x], df[y], n),
+                        Suggester.evidence(c, List.of(c.terms[y]), List.of(), Math.min(1, o.evidenceLines()), index)));
                 count++;
             }
         }
         return count;
     }
 
-    /** Whether parent x subsumes child y, given n listings with both. */
-    private static void consider(Catalog c, int x, int y, int n, long[] df, long listings, double t, SuggestOptions o,
-                                 List<List<HierarchySuggestion>> perChild) {
+    /** Whether half or more of the words hold a digit. */
+    static boolean mostlyNumbers(String term) {
+        String[] t = term.split(" ");
+        int d = 0;
+        for (String w : t) {
+            for (int k = 0; k < w.length(); k++) {
+                if (Character.isDigit(w.charAt(k))) {
+                    d++;
+                    break;
+                }
+            }
+        }
+        return d * 2 >= t.length;
+    }
+
+    /** The score of parent x over child y with n listings together, or 0 when x does not subsume y. */
+    private static double score(Catalog c, int x, int y, int n, long[] df, double t) {
         double pxy = (double) n / df[y];
         double pyx = (double) n / df[x];
-        if (pxy < t || pyx >= 1 || (double) df[x] / listings > o.maxParentDfShare() || ContextVectors.related(c, x, y)) {
-            return;
+        if (pxy < t || pyx >= 1 || ContextVectors.related(c, x, y)) {
+            return 0;
         }
-        double score = 0.5 + 0.4 * Math.min(1, (pxy - t) / Math.max(1e-9, 1 - t) * 0.5 + 0.5) * (1 - pyx);
-        String why = String.format(Locale.ROOT, "subsumption: %d of the %d listings with \"%s\" also have \"%s\" (P = %.2f ≥ %.2f), "
-                + "but only %d of its %d do (P = %.2f)", n, df[y], c.terms[y], c.terms[x], pxy, t, n, df[x], pyx);
-        if (perChild.get(y) == null) {
-            perChild.set(y, new ArrayList<>());
-        }
-        perChild.get(y).add(new HierarchySuggestion(HierarchySuggestion.Kind.SUBSUMPTION, node(c, x), node(c, y), Kinds.clamp(score), why,
-                new HierarchySuggestion.Counts(df[x], df[y], n), List.of()));
+        // surer the closer P(parent|child) is to 1 and the less the parent needs the child
+        return Kinds.clamp(0.5 + 0.4 * Math.min(1, (pxy - t) / Math.max(1e-9, 1 - t) * 0.5 + 0.5) * (1 - pyx));
     }
 }

@@ -21,31 +21,59 @@ final class Kinds {
 
     static void run(Catalog c, Corpus.Result corpus, SuggestOptions o, Proposals p, Map<Suggestion.Kind, Integer> found,
                     List<String> notes) {
+        Timer time = new Timer();
         Map<String, Proposals.Term> specTerms = specValueTerms(c);
+        time.lap("spec values");
         if (o.kinds().contains(Suggestion.Kind.SAME_GROUP_KEY)) {
             found.put(Suggestion.Kind.SAME_GROUP_KEY, groupKeys(c, p));
         }
+        time.lap("group keys");
         if (o.kinds().contains(Suggestion.Kind.SPELLING_VARIANT)) {
             found.put(Suggestion.Kind.SPELLING_VARIANT, spelling(c, specTerms, o, p));
         }
+        time.lap("spelling");
         if (o.kinds().contains(Suggestion.Kind.ABBREVIATION)) {
             if (corpus == null) {
                 notes.add("abbreviations: no listings were read, so definitions were looked for in the harvest's evidence lines only");
             }
             found.put(Suggestion.Kind.ABBREVIATION, abbreviations(c, corpus, p));
         }
+        time.lap("abbreviations");
+        ContextVectors.Vectors vectors = corpus == null ? null : ContextVectors.vectors(c.size(), corpus);
+        time.lap("context vectors");
         if (o.kinds().contains(Suggestion.Kind.WORDNET_SYNONYM)) {
-            found.put(Suggestion.Kind.WORDNET_SYNONYM, WordNetSynonyms.run(c, p, notes));
+            found.put(Suggestion.Kind.WORDNET_SYNONYM, WordNetSynonyms.run(c, p, vectors, notes));
         }
+        time.lap("wordnet");
         if (o.kinds().contains(Suggestion.Kind.DISTRIBUTIONAL)) {
             if (corpus == null) {
                 notes.add("distributional: not run, it needs the listings (context vectors are counted in a pass over them)");
             } else {
-                found.put(Suggestion.Kind.DISTRIBUTIONAL, ContextVectors.run(c, corpus, o, p));
+                found.put(Suggestion.Kind.DISTRIBUTIONAL, ContextVectors.run(c, corpus, vectors, o, p));
             }
         }
+        time.lap("distributional");
         if (o.kinds().contains(Suggestion.Kind.SAME_SPEC_KEY)) {
             found.put(Suggestion.Kind.SAME_SPEC_KEY, sameSpecKey(c, p));
+        }
+        time.lap("same spec key");
+        notes.add("time: " + time);
+    }
+
+    /** Wall-clock laps, for the summary's notes. */
+    static final class Timer {
+        private long last = System.nanoTime();
+        private final StringBuilder b = new StringBuilder();
+
+        void lap(String what) {
+            long now = System.nanoTime();
+            b.append(b.length() == 0 ? "" : ", ").append(what).append(' ').append(String.format(Locale.ROOT, "%.2f s", (now - last) / 1e9));
+            last = now;
+        }
+
+        @Override
+        public String toString() {
+            return b.toString();
         }
     }
 
@@ -220,6 +248,7 @@ final class Kinds {
         }
         // multiword candidates by (position, other words) so a word pair finds the term pairs it makes
         Map<String, List<Integer>> slots = new HashMap<>();
+        Map<String, List<Integer>> holding = new HashMap<>();
         for (int i = 0; i < c.size(); i++) {
             String[] t = c.tokens[i];
             if (t.length < 2) {
@@ -227,6 +256,10 @@ final class Kinds {
             }
             for (int k = 0; k < t.length; k++) {
                 slots.computeIfAbsent(slotKey(t, k), x -> new ArrayList<>()).add(i);
+                List<Integer> h = holding.computeIfAbsent(t[k], x -> new ArrayList<>());
+                if (h.isEmpty() || h.get(h.size() - 1) != i) {
+                    h.add(i);
+                }
             }
         }
         int n = 0;
@@ -270,11 +303,8 @@ final class Kinds {
                 n++;
             }
             // the terms that differ only in this word
-            for (int i = 0; i < c.size(); i++) {
+            for (int i : holding.getOrDefault(rare, List.of())) {
                 String[] t = c.tokens[i];
-                if (t.length < 2) {
-                    continue;
-                }
                 for (int pos = 0; pos < t.length; pos++) {
                     if (!t[pos].equals(rare)) {
                         continue;

@@ -63,6 +63,9 @@ final class Spelling {
     }
 
     static String collapseDoubles(String w) {
+        if (w.length() < 4) {
+            return w; // "xxl" / "xl", "ss" / "s": sizes and codes, not doubled consonants
+        }
         StringBuilder b = new StringBuilder(w.length());
         for (int i = 0; i < w.length(); i++) {
             char c = w.charAt(i);

@@ -17,7 +17,7 @@ import java.util.Set;
  *   <li>{@code kinds}: every {@link Suggestion.Kind}; {@code hierarchyKinds}: every {@link HierarchySuggestion.Kind};</li>
  *   <li>{@code maxEditShare} {@value #DEFAULT_MAX_EDIT_SHARE}: edits allowed per character for a misspelling
  *       (at least one edit; words shorter than {@value #DEFAULT_MIN_EDIT_LENGTH} letters are never compared);</li>
- *   <li>{@code contextWindow} {@value #DEFAULT_CONTEXT_WINDOW} tokens each side, inside one segment;</li>
+ *   <li>{@code contextWindow} {@value #DEFAULT_CONTEXT_WINDOW} tokens each side, inside one field text (stop words left out);</li>
  *   <li>{@code contextMinFrequency} {@value #DEFAULT_CONTEXT_MIN_FREQUENCY}: only candidates seen this often get a context vector;</li>
  *   <li>{@code minCosine} {@value #DEFAULT_MIN_COSINE}: the lowest PPMI cosine proposed;</li>
  *   <li>{@code subsumption} {@value #DEFAULT_SUBSUMPTION}: x subsumes y when P(x|y) ≥ this and P(y|x) &lt; 1;</li>
@@ -31,7 +31,7 @@ public final class SuggestOptions {
     public static final double DEFAULT_MIN_SCORE = 0.5;
     public static final double DEFAULT_MAX_EDIT_SHARE = 0.2;
     public static final int DEFAULT_MIN_EDIT_LENGTH = 5;
-    public static final int DEFAULT_CONTEXT_WINDOW = 2;
+    public static final int DEFAULT_CONTEXT_WINDOW = 3;
     public static final int DEFAULT_CONTEXT_MIN_FREQUENCY = 10;
     public static final double DEFAULT_MIN_COSINE = 0.3;
     public static final double DEFAULT_SUBSUMPTION = 0.8;
@@ -266,7 +266,7 @@ public final class SuggestOptions {
                 throw new IllegalArgumentException("maxEditShare must be in (0, 0.5], got " + maxEditShare + "; try 0.2");
             }
             range("minEditLength", minEditLength, 2, 100, "5");
-            range("contextWindow", contextWindow, 1, 10, "2");
+            range("contextWindow", contextWindow, 1, 10, "3");
             range("contextMinFrequency", contextMinFrequency, 1, Integer.MAX_VALUE, "10");
             unit("minCosine", minCosine, "0.3");
             if (!(subsumption > 0.5 && subsumption <= 1)) {

@@ -340,14 +340,19 @@ public final class Suggester {
                 built = true;
             }
             List<String> notes = new ArrayList<>();
+            Kinds.Timer time = new Kinds.Timer();
             Corpus.Result counts = cp == null ? null : cp.finish();
+            time.lap("adding up the listing counts");
             Proposals p = new Proposals();
             Map<Suggestion.Kind, Integer> found = new EnumMap<>(Suggestion.Kind.class);
             Set<Suggestion.Kind> kinds = options.kinds();
             Kinds.run(c, counts, options, p, found, notes);
             List<Suggestion> raw = Kinds.toSuggestions(c, p, options, index);
+            time.lap("merge kinds and evidence");
             Map<HierarchySuggestion.Kind, Integer> foundH = new EnumMap<>(HierarchySuggestion.Kind.class);
             List<HierarchySuggestion> rawH = Hierarchy.run(c, counts, options, foundH, notes, index);
+            time.lap("hierarchy kinds");
+            notes.add("time: " + time);
             Summary s = new Summary(c.size(), counts == null ? 0 : counts.listings(), found, foundH, notes,
                     Duration.ofNanos(System.nanoTime() - t0));
             return new Suggester(c, options, raw, rawH, decide(c, vocabulary), s);

