@@ -43,7 +43,16 @@ public final class CuratorApp extends Application {
      * ({@link MainView#addSidePanel}); each follows {@link MainViewModel#sessionProperty()}.
      */
     public static void installPanels(MainView view, MainViewModel vm) {
-        // the default panels are built by MainView itself
+        dev.sheaf.curator.hierarchy.StructurePanels p = new dev.sheaf.curator.hierarchy.StructurePanels(vm.sessionProperty());
+        javafx.scene.control.SplitPane centre = new javafx.scene.control.SplitPane(
+                new dev.sheaf.curator.concepts.ConceptListView(vm.sessionProperty()).node(), p.hierarchy());
+        centre.setOrientation(javafx.geometry.Orientation.VERTICAL);
+        centre.setDividerPositions(0.2);
+        view.setHierarchyView(centre);
+        view.addSidePanel("Facet", p.facet());
+        view.addSidePanel("Suggestions", p.suggestions());
+        view.addSidePanel("Checks", p.checks());
+        view.addSidePanel("Figures", p.figures());
     }
 
     /** Puts the view in the stage with the close guard (unsaved edits are asked about). */
