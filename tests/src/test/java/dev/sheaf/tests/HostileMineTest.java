@@ -129,6 +129,7 @@ class HostileMineTest {
         for (CSVRecord r : problemRows()) {
             assertFalse(r.get("reason").isBlank(), r.toString());
             assertTrue(Problem.KINDS.contains(r.get("kind")), r.toString());
+            assertFalse(r.get("reason").contains("failed unexpectedly"), "a reader crashed: " + r);
         }
         assertTrue(kinds.keySet().stream().noneMatch(f -> f.startsWith("catalog/")), "the demo catalog has no problem: " + kinds.keySet());
     }

@@ -102,6 +102,8 @@ final class DocumentReader implements ListingReader {
         md.set(TikaCoreProperties.RESOURCE_NAME_KEY, file.path().getFileName().toString());
         try (TikaInputStream in = TikaInputStream.get(file.path(), md)) {
             return Holder.PARSER.getDetector().detect(in, md);
+        } catch (RuntimeException e) {
+            return MediaType.OCTET_STREAM; // a detector choked on the content (seen: malformed XML): unknown
         }
     }
 
@@ -109,6 +111,8 @@ final class DocumentReader implements ListingReader {
     private static MediaType detectContent(SourceFile file) throws IOException {
         try (TikaInputStream in = TikaInputStream.get(file.path())) {
             return Holder.PARSER.getDetector().detect(in, new Metadata());
+        } catch (RuntimeException e) {
+            return MediaType.OCTET_STREAM;
         }
     }
 
@@ -243,8 +247,10 @@ final class DocumentReader implements ListingReader {
                         }
                     }
                 }
-            } catch (IOException e) {
-                return null; // a damaged zip: Tika says what it can of it
+            } catch (IOException | IllegalArgumentException e) {
+                // a damaged zip (or an entry name that is not UTF-8, which ZipInputStream rejects
+                // with an IllegalArgumentException): Tika says what it can of it
+                return null;
             }
         }
         return null;
