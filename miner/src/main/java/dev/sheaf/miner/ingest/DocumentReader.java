@@ -39,7 +39,7 @@ import org.xml.sax.SAXException;
  * document is truncated and reported "too-large"); each parse runs in a worker thread and is
  * abandoned after {@link SourceFile#perFileTimeout()} ("timeout"); at most
  * {@value #MAX_EMBEDDED} embedded documents are parsed per file; Tika's
- * {@code SecureContentHandler} (on by default in {@code AutoDetectParser}) stops zip bombs. No
+ * {@code SecureContentHandler} (on by default in {@code AutoDetectParser}) and {@link #zipBomb} stop zip bombs. No
  * external programs are run: the OCR parser and the external-command parsers are excluded, and
  * PDF OCR is off. Nothing is fetched from the network.
  */
@@ -102,6 +102,8 @@ final class DocumentReader implements ListingReader {
         md.set(TikaCoreProperties.RESOURCE_NAME_KEY, file.path().getFileName().toString());
         try (TikaInputStream in = TikaInputStream.get(file.path(), md)) {
             return Holder.PARSER.getDetector().detect(in, md);
+        } catch (RuntimeException e) {
+            return MediaType.OCTET_STREAM; // a detector choked on the content (seen: malformed XML): unknown
         }
     }
 
@@ -109,6 +111,8 @@ final class DocumentReader implements ListingReader {
     private static MediaType detectContent(SourceFile file) throws IOException {
         try (TikaInputStream in = TikaInputStream.get(file.path())) {
             return Holder.PARSER.getDetector().detect(in, new Metadata());
+        } catch (RuntimeException e) {
+            return MediaType.OCTET_STREAM;
         }
     }
 
@@ -119,6 +123,11 @@ final class DocumentReader implements ListingReader {
             file.problem("", "corrupt", "the content is not a recognisable document"
                     + (byName.equals(MediaType.OCTET_STREAM) ? "" : " (the name says " + byName + ")")
                     + "; check that the file opens in its own program, or exclude it");
+            return;
+        }
+        String bomb = zipBomb(file);
+        if (bomb != null) {
+            file.problem("", "corrupt", "refused as a suspected zip bomb (" + bomb + ")");
             return;
         }
         Metadata md = new Metadata();
@@ -195,6 +204,56 @@ final class DocumentReader implements ListingReader {
             file.problem("", "too-large", "only the first " + file.writeLimit() + " characters of text were read");
         }
         TextReader.emit(file, text, false, "");
+    }
+
+    /** Most bytes of XML a zip-based document (DOCX, ODT, PPTX, EPUB) may expand to: its parts are loaded whole. */
+    static final long MAX_ZIP_XML_BYTES = 64L * 1024 * 1024;
+    /** Most a zip-based document may expand, as a multiple of its size, once past {@link #ZIP_RATIO_FLOOR} (POI's own ratio). */
+    static final int MAX_ZIP_RATIO = 100;
+    static final long ZIP_RATIO_FLOOR = 10L * 1024 * 1024;
+
+    /**
+     * Inflates a zip-based document's entries without keeping them, and names the reason when it
+     * expands beyond {@link #MAX_ZIP_XML_BYTES} of XML or {@link #MAX_ZIP_RATIO} times its size;
+     * null for a file that is not a zip or is within both. Tika's and POI's own checks do not stop
+     * a DOCX whose one text run is hundreds of megabytes: POI loads the part whole (measured: out
+     * of memory at 512 MB for a 290 KB file). Stops inflating as soon as a limit is passed.
+     */
+    static String zipBomb(SourceFile file) throws IOException {
+        try (InputStream raw = new java.io.BufferedInputStream(java.nio.file.Files.newInputStream(file.path()))) {
+            raw.mark(4);
+            byte[] magic = raw.readNBytes(4);
+            raw.reset();
+            if (magic.length < 4 || magic[0] != 'P' || magic[1] != 'K' || magic[2] != 3 || magic[3] != 4) {
+                return null;
+            }
+            long total = 0;
+            long xml = 0;
+            byte[] buf = new byte[1 << 16];
+            try (java.util.zip.ZipInputStream zip = new java.util.zip.ZipInputStream(raw)) {
+                for (java.util.zip.ZipEntry e; (e = zip.getNextEntry()) != null; ) {
+                    String name = e.getName().toLowerCase(java.util.Locale.ROOT);
+                    boolean isXml = name.endsWith(".xml") || name.endsWith(".rels") || name.endsWith(".xhtml") || name.endsWith(".html");
+                    for (int n; (n = zip.read(buf)) > 0; ) {
+                        total += n;
+                        if (isXml) {
+                            xml += n;
+                        }
+                        if (xml > MAX_ZIP_XML_BYTES) {
+                            return "its XML parts expand to more than " + MAX_ZIP_XML_BYTES + " bytes";
+                        }
+                        if (total > ZIP_RATIO_FLOOR && total > (long) MAX_ZIP_RATIO * file.size()) {
+                            return "it expands to more than " + MAX_ZIP_RATIO + " times its " + file.size() + " bytes";
+                        }
+                    }
+                }
+            } catch (IOException | IllegalArgumentException e) {
+                // a damaged zip (or an entry name that is not UTF-8, which ZipInputStream rejects
+                // with an IllegalArgumentException): Tika says what it can of it
+                return null;
+            }
+        }
+        return null;
     }
 
     private static boolean isCause(Throwable t, Class<? extends Throwable> k) {

@@ -55,7 +55,7 @@ public final class Ingest {
     public static final long DEFAULT_MAX_FILE_BYTES = 50L * 1024 * 1024;
     /** Default time one document parse may take: 60 s. */
     public static final Duration DEFAULT_PER_FILE_TIMEOUT = Duration.ofSeconds(60);
-    /** Default characters of text kept per extracted document (PDF, DOCX ...): 5 million. */
+    /** Default characters of text kept per extracted document (PDF, DOCX ...) and per text file: 5 million. */
     public static final int DEFAULT_MAX_TEXT_CHARS = 5_000_000;
 
     private final List<SourceSpec> sources;
@@ -145,7 +145,7 @@ public final class Ingest {
             return this;
         }
 
-        /** Characters of text kept per extracted document (Tika's write limit); default 5 million. */
+        /** Characters of text kept per extracted document (Tika's write limit) and per text file; default 5 million. */
         public Builder maxTextChars(int n) {
             if (n < 1) {
                 throw new IllegalArgumentException("maxTextChars must be positive, got " + n);
@@ -343,7 +343,16 @@ public final class Ingest {
 
                 @Override
                 public FileVisitResult visitFile(Path file, BasicFileAttributes attrs) {
-                    if (!attrs.isRegularFile() || file.getFileName().toString().startsWith(".")) {
+                    if (file.getFileName().toString().startsWith(".")) {
+                        return FileVisitResult.CONTINUE;
+                    }
+                    if (attrs.isSymbolicLink()) {
+                        // links are followed: a link seen as a link leads nowhere (dangling, or a loop of links)
+                        c.problem(new Problem(display(file), "", "unreadable",
+                                "a symbolic link that leads to no file (its target is missing, or links loop); it was skipped"));
+                        return FileVisitResult.CONTINUE;
+                    }
+                    if (!attrs.isRegularFile()) {
                         return FileVisitResult.CONTINUE;
                     }
                     Path rel = root.relativize(file);

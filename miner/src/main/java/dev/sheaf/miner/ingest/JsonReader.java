@@ -1,6 +1,7 @@
 package dev.sheaf.miner.ingest;
 
 import com.fasterxml.jackson.core.JsonFactory;
+import com.fasterxml.jackson.core.JsonLocation;
 import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.core.JsonToken;
@@ -95,7 +96,8 @@ final class JsonReader implements ListingReader {
             return;
         }
         Mapper mapper = new Mapper(file);
-        try (JsonParser p = FACTORY.createParser(new BufferedReader(r, 1 << 16))) {
+        JsonParser p = FACTORY.createParser(new BufferedReader(r, 1 << 16));
+        try (p) {
             p.setCodec(MAPPER);
             JsonToken t;
             while ((t = p.nextToken()) != null) {
@@ -109,7 +111,9 @@ final class JsonReader implements ListingReader {
                 }
             }
         } catch (JsonProcessingException e) {
-            file.problem("line " + e.getLocation().getLineNr(), "parse", "not valid JSON (" + e.getOriginalMessage()
+            // a limit of the parser (nesting depth, number or string length) comes without a location
+            JsonLocation at = e.getLocation() != null ? e.getLocation() : p.currentLocation();
+            file.problem("line " + at.getLineNr(), "parse", "not valid JSON (" + e.getOriginalMessage()
                     + "); the listings before it were read, the rest of the file was skipped");
         } finally {
             file.reportEncoding(r);

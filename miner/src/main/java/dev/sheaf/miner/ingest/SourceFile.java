@@ -150,15 +150,27 @@ final class SourceFile {
 
     /** Reads all text (the file is within the size limit); null when it is binary. */
     String readText(Function<byte[], Charset> declared) throws IOException {
+        return readText(declared, Integer.MAX_VALUE - 16);
+    }
+
+    /**
+     * Reads at most {@code maxChars} characters of text; when more follow, they are not read and a
+     * "too-large" problem says so. Null when the file is binary.
+     */
+    String readText(Function<byte[], Charset> declared, int maxChars) throws IOException {
         try (DecodingReader r = openText(declared)) {
             if (r == null) {
                 return null;
             }
-            StringBuilder b = new StringBuilder((int) Math.min(size, Integer.MAX_VALUE - 16));
+            StringBuilder b = new StringBuilder((int) Math.min(Math.min(size, maxChars), Integer.MAX_VALUE - 16));
             char[] buf = new char[8192];
             int n;
-            while ((n = r.read(buf, 0, buf.length)) >= 0) {
+            while (b.length() < maxChars && (n = r.read(buf, 0, Math.min(buf.length, maxChars - b.length()))) >= 0) {
                 b.append(buf, 0, n);
+            }
+            if (b.length() >= maxChars && r.read() >= 0) {
+                problem("", "too-large", "only the first " + maxChars + " characters of text were read (the limit for one listing); "
+                        + "split the file or raise the text limit");
             }
             reportEncoding(r);
             String s = b.toString();

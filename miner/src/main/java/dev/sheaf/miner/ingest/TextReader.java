@@ -5,7 +5,8 @@ import java.io.IOException;
 /**
  * One listing per plain-text or Markdown file. Title: the first {@code #} heading (Markdown) or
  * the first non-empty line; "Key: value" lines are specs, {@code - x} / {@code * x} lines bullets,
- * other Markdown headings headings, the rest paragraphs of text (see {@link SpecLines}).
+ * other Markdown headings headings, the rest paragraphs of text (see {@link SpecLines}). Like an
+ * extracted document, at most {@link SourceFile#writeLimit()} characters are read ("too-large" beyond).
  */
 final class TextReader implements ListingReader {
     @Override
@@ -15,7 +16,7 @@ final class TextReader implements ListingReader {
 
     @Override
     public void read(SourceFile file) throws IOException {
-        String text = file.readText(null);
+        String text = file.readText(null, file.writeLimit());
         if (text == null) {
             return;
         }

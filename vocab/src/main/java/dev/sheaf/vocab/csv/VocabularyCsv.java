@@ -154,6 +154,8 @@ public final class VocabularyCsv {
                 new Row(rec, header, source, line, scheme.defaultLanguage()).into(concepts, retired);
                 line = p.getCurrentLineNumber() + 1;
             }
+        } catch (org.apache.commons.csv.CSVException e) {
+            throw malformed(e, source); // a quoting error in the header row, met when the parser starts
         } catch (UncheckedIOException e) {
             throw malformed(e.getCause(), source);
         } catch (IllegalStateException | IllegalArgumentException e) {

@@ -123,6 +123,10 @@ public final class Skos {
             throw new VocabularyFormatException(source, (int) Math.max(0, e.getLineNumber()),
                     (int) Math.max(0, e.getColumnNumber()), null,
                     "not valid " + syntax.format.getName() + ": " + msg, e);
+        } catch (java.io.UnsupportedEncodingException | java.io.CharConversionException e) {
+            // the XML declaration names an encoding Java does not have, or the bytes do not fit it
+            throw new VocabularyFormatException(source, 1, 0, null, "not valid " + syntax.format.getName()
+                    + ": cannot decode the file (" + e.getClass().getSimpleName() + ": " + e.getMessage() + "); save it as UTF-8", e);
         }
         return new SkosReader(m, source).read();
     }
