@@ -40,44 +40,7 @@ import org.testfx.util.WaitForAsyncUtils;
  * undo and redo, save, reopen and find everything as left. Screenshots of each state go to
  * {@code target/screenshots/}.
  */
-@ExtendWith(ApplicationExtension.class)
-class CuratorUiTest {
-    @TempDir
-    static Path tmp;
-    private MainViewModel vm;
-    private MainView view;
-    private Stage stage;
-
-    @Start
-    void start(Stage stage) throws Exception {
-        this.stage = stage;
-        vm = CuratorApp.newViewModel(new RecentWorkspaces(Files.createTempDirectory("sheaf-config").resolve(RecentWorkspaces.FILE_NAME)));
-        view = new MainView(vm);
-        CuratorApp.installPanels(view, vm);
-        CuratorApp.show(stage, view, vm);
-    }
-
-    private static void waitUntil(Callable<Boolean> c) throws Exception {
-        WaitForAsyncUtils.waitFor(120, TimeUnit.SECONDS, c);
-        WaitForAsyncUtils.waitForFxEvents();
-    }
-
-    private void openAndWait(FxRobot robot, Path ws) throws Exception {
-        robot.interact(() -> vm.open(ws));
-        waitUntil(() -> vm.session() != null && !vm.background().runningProperty().get());
-    }
-
-    private void shot(FxRobot robot, String name) {
-        WaitForAsyncUtils.waitForFxEvents();
-        robot.interact(() -> {
-            try {
-                Screenshots.save(stage.getScene(), name);
-            } catch (java.io.IOException e) {
-                throw new java.io.UncheckedIOException(e);
-            }
-        });
-    }
-
+class CuratorUiTest extends WindowTestBase {
     @SuppressWarnings("unchecked")
     private TableView<CandidateRow> table(FxRobot robot) {
         return robot.lookup("#harvest-table").queryAs(TableView.class);

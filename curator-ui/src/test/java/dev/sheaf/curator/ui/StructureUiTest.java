@@ -50,44 +50,7 @@ import org.testfx.util.WaitForAsyncUtils;
  * the regulated-claim caution, the checks jumping to a concept, and the tree with 5,000 concepts.
  * Screenshots go to {@code target/screenshots/} (names starting with "s").
  */
-@ExtendWith(ApplicationExtension.class)
-class StructureUiTest {
-    @TempDir
-    static Path tmp;
-    private MainViewModel vm;
-    private MainView view;
-    private Stage stage;
-
-    @Start
-    void start(Stage stage) throws Exception {
-        this.stage = stage;
-        vm = CuratorApp.newViewModel(new RecentWorkspaces(Files.createTempDirectory("sheaf-config").resolve(RecentWorkspaces.FILE_NAME)));
-        view = new MainView(vm);
-        CuratorApp.installPanels(view, vm);
-        CuratorApp.show(stage, view, vm);
-    }
-
-    private static void waitUntil(Callable<Boolean> c) throws Exception {
-        WaitForAsyncUtils.waitFor(180, TimeUnit.SECONDS, c);
-        WaitForAsyncUtils.waitForFxEvents();
-    }
-
-    private void openAndWait(FxRobot robot, Path ws) throws Exception {
-        robot.interact(() -> vm.open(ws));
-        waitUntil(() -> vm.session() != null && !vm.background().runningProperty().get());
-    }
-
-    private void shot(FxRobot robot, String name) {
-        WaitForAsyncUtils.waitForFxEvents();
-        robot.interact(() -> {
-            try {
-                Screenshots.save(stage.getScene(), name);
-            } catch (java.io.IOException e) {
-                throw new java.io.UncheckedIOException(e);
-            }
-        });
-    }
-
+class StructureUiTest extends WindowTestBase {
     @SuppressWarnings("unchecked")
     private TreeView<TreeNode> tree(FxRobot robot) {
         return robot.lookup("#hierarchy-tree").queryAs(TreeView.class);

@@ -1,9 +1,7 @@
 package dev.sheaf.miner.suggest;
 
 import dev.sheaf.miner.text.EvidenceLine;
-import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.Objects;
 
 /**
@@ -32,22 +30,12 @@ public record HierarchySuggestion(Kind kind, Node parent, Node child, double sco
 
         /** The word used in files: facet-value, head-modifier, subsumption. */
         public String word() {
-            return name().toLowerCase(Locale.ROOT).replace('_', '-');
+            return KindWords.word(this);
         }
 
         /** The kind for a word as {@link #word()} writes it. */
         public static Kind ofWord(String w) {
-            String n = w.strip().toUpperCase(Locale.ROOT).replace('-', '_');
-            for (Kind k : values()) {
-                if (k.name().equals(n)) {
-                    return k;
-                }
-            }
-            List<String> words = new ArrayList<>();
-            for (Kind k : values()) {
-                words.add(k.word());
-            }
-            throw new IllegalArgumentException("hierarchy kind \"" + w + "\" is not one of " + String.join(", ", words));
+            return KindWords.of(Kind.class, w, "hierarchy kind");
         }
     }
 

@@ -5,7 +5,6 @@ import java.util.ArrayList;
 import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import java.util.Objects;
 
@@ -45,22 +44,12 @@ public record Suggestion(Kind kind, List<Member> members, double score, String r
 
         /** The word used in files and on the command line: same-group-key, spelling-variant … */
         public String word() {
-            return name().toLowerCase(Locale.ROOT).replace('_', '-');
+            return KindWords.word(this);
         }
 
         /** The kind for a word as {@link #word()} writes it (case-insensitive, '_' or '-'). */
         public static Kind ofWord(String w) {
-            String n = w.strip().toUpperCase(Locale.ROOT).replace('-', '_');
-            for (Kind k : values()) {
-                if (k.name().equals(n)) {
-                    return k;
-                }
-            }
-            List<String> words = new ArrayList<>();
-            for (Kind k : values()) {
-                words.add(k.word());
-            }
-            throw new IllegalArgumentException("suggestion kind \"" + w + "\" is not one of " + String.join(", ", words));
+            return KindWords.of(Kind.class, w, "suggestion kind");
         }
     }
 
