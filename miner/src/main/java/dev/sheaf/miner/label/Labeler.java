@@ -291,7 +291,47 @@ public final class Labeler {
      * as a category error and counts as applicable in fill rates.
      */
     public static boolean applies(FacetProperties facet, String category) {
-        return category == null || category.isEmpty() || facet.appliesTo(category);
+        if (category == null || category.isEmpty() || facet.appliesTo(category)) {
+            return true;
+        }
+        String key = categoryKey(category);
+        for (String c : facet.categories()) {
+            if (categoryKey(c).equals(key)) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    private static final java.util.concurrent.ConcurrentHashMap<String, String> CATEGORY_KEYS = new java.util.concurrent.ConcurrentHashMap<>();
+
+    /**
+     * A category name as compared and grouped: lower case (locale-free), every run of other
+     * characters than letters and digits one hyphen, "&amp;" read as "and" — so a spec sheet's
+     * "Sleeping Bags", a feed's "sleeping-bags" and "sleeping_bags" are one category (107).
+     */
+    public static String categoryKey(String category) {
+        if (category.length() > 200) {
+            return key(category);
+        }
+        return CATEGORY_KEYS.size() < 10_000 ? CATEGORY_KEYS.computeIfAbsent(category, Labeler::key) : key(category);
+    }
+
+    private static String key(String category) {
+        String s = category.replace("&", " and ").toLowerCase(java.util.Locale.ROOT);
+        StringBuilder b = new StringBuilder(s.length());
+        for (int i = 0; i < s.length(); i++) {
+            char ch = s.charAt(i);
+            if (Character.isLetterOrDigit(ch)) {
+                b.append(ch);
+            } else if (b.length() > 0 && b.charAt(b.length() - 1) != '-') {
+                b.append('-');
+            }
+        }
+        if (b.length() > 0 && b.charAt(b.length() - 1) == '-') {
+            b.setLength(b.length() - 1);
+        }
+        return b.toString();
     }
 
     /** A number facet as the labeler needs it. */
