@@ -65,6 +65,8 @@ public final class Labeler {
     private final String[] conceptIds;
     private final String[] conceptFacet;
     private final FacetProperties[][] conceptFacetProps;
+    /** Per concept, the category keys where one of its facets applies; null when one applies everywhere. */
+    private final java.util.Set<String>[] conceptCategoryKeys;
     private final boolean[] conceptReview;
 
     private final NumberFacet[] numberFacets;
@@ -126,6 +128,9 @@ public final class Labeler {
         conceptIds = new String[n];
         conceptFacet = new String[n];
         conceptFacetProps = new FacetProperties[n][];
+        @SuppressWarnings("unchecked")
+        java.util.Set<String>[] categoryKeys = new java.util.Set[n];
+        conceptCategoryKeys = categoryKeys;
         conceptReview = new boolean[n];
         LabelTrie.Builder tb = LabelTrie.builder();
         int compiled = 0;
@@ -135,11 +140,20 @@ public final class Labeler {
             List<Concept> facets = vocabulary.facetsOf(c.id());
             conceptFacet[i] = facets.isEmpty() ? null : facets.get(0).id();
             conceptFacetProps[i] = new FacetProperties[facets.size()];
+            java.util.Set<String> catKeys = facets.isEmpty() ? null : new java.util.HashSet<>();
             for (int k = 0; k < facets.size(); k++) {
                 FacetProperties p = facets.get(k).facet();
                 conceptFacetProps[i][k] = p;
                 conceptReview[i] |= p.regulatedClaim();
+                if (p.categories().isEmpty()) {
+                    catKeys = null;
+                } else if (catKeys != null) {
+                    for (String x : p.categories()) {
+                        catKeys.add(categoryKey(x));
+                    }
+                }
             }
+            conceptCategoryKeys[i] = catKeys;
             for (ConceptLabel l : c.labels()) {
                 int[] path = labelPath(compileSegmenter, c.id(), l);
                 if (path != null) {
@@ -272,17 +286,10 @@ public final class Labeler {
         return path.toIntArray();
     }
 
+    /** As {@link #applies(FacetProperties, String)} for any of the concept's facets, with the category keys computed once. */
     private boolean applies(int concept, String category) {
-        FacetProperties[] ps = conceptFacetProps[concept];
-        if (ps.length == 0) {
-            return true;
-        }
-        for (FacetProperties p : ps) {
-            if (applies(p, category)) {
-                return true;
-            }
-        }
-        return false;
+        java.util.Set<String> keys = conceptCategoryKeys[concept];
+        return keys == null || category == null || category.isEmpty() || keys.contains(categoryKey(category));
     }
 
     /**
