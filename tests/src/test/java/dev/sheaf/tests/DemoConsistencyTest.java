@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import dev.sheaf.miner.ingest.Workspace;
+import dev.sheaf.miner.label.AssignmentsJsonl;
 import dev.sheaf.miner.label.Labeler;
 import dev.sheaf.miner.label.LabelRun;
 import dev.sheaf.miner.measure.AgreementAnalysis;
@@ -41,6 +42,7 @@ import dev.sheaf.vocab.Vocabulary;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
+import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
@@ -169,8 +171,7 @@ class DemoConsistencyTest {
         JsonNode truth = planted.get("feedback").get("attributes");
         // ours → the demo's tally: presence statements, and comparisons on the bundled example scales
         Map<String, String> presence = Map.of("hood", "hood", "waterproof", "waterproof-claim", "hip-belt", "hip-belt");
-        Map<String, String> comparison = Map.of("light-output", "brightness", "pack-volume", "volume",
-                "waterproof-rating", "waterproofness");
+        Map<String, String> comparison = Map.of("light-output", "brightness", "pack-volume", "volume");
         presence.forEach((ours, demo) -> {
             ConsistencyAttribute a = c.attribute(ours).orElseThrow();
             double expected = truth.get(demo).get("agreesWithSpecs").asDouble() / truth.get(demo).get("mentions").asDouble();
@@ -183,6 +184,26 @@ class DemoConsistencyTest {
             assertTrue(a.grounding().comparisonChecked() >= 30, ours);
             assertEquals(expected, a.grounding().comparisonPrecision(), 0.05, ours);
         });
+        // Waterproof rating, between listings that state one rating: a tent page giving "Fly 2,500 mm / floor
+        // 7,000 mm" is grounded on the median of both (4,750), where the demo's tally compares the fly. Since the
+        // readers take page and sheet ids from the visible SKU line (decision 107), those old-template pages meet
+        // their feedback and the two-rating trap shows (0.78 against 0.86 over all pairs); it is left out here.
+        Map<String, Integer> ratings = new HashMap<>();
+        AssignmentsJsonl.read(out.resolve("assignments.jsonl"), vocabulary, x -> ratings.put(x.listingId(),
+                (int) x.assignments().stream().filter(y -> y.isNumber() && y.conceptId().equals("waterproof-rating")).count()));
+        long wChecked = 0;
+        long wGrounded = 0;
+        for (FeedbackMention m : c.mentions()) {
+            if (m.attribute().equals("waterproof-rating") && m.grounding().checked()
+                    && ratings.getOrDefault(m.targetId(), 0) == 1 && ratings.getOrDefault(m.referenceId(), 0) == 1) {
+                wChecked++;
+                wGrounded += m.grounding().grounded() ? 1 : 0;
+            }
+        }
+        JsonNode wp = truth.get("waterproofness");
+        assertTrue(wChecked >= 30, "waterproof-rating comparisons checked: " + wChecked);
+        assertEquals(wp.get("agreesWithSpecs").asDouble() / wp.get("mentions").asDouble(), (double) wGrounded / wChecked, 0.05,
+                "waterproof-rating");
         // Weight, outside footwear and trekking poles: those state weights per shoe or per pole beside
         // others per pair (a trap the demo plants for the labeler), so their comparisons are left out here.
         Set<String> perItem = Set.of("footwear", "trekking-poles");
@@ -190,7 +211,8 @@ class DemoConsistencyTest {
         long grounded = 0;
         for (FeedbackMention m : c.mentions()) {
             if (m.attribute().equals("weight") && m.grounding().checked()
-                    && !perItem.contains(g.catalog().listing(m.targetId()).orElseThrow().category())) {
+                    // spec sheets name the category "Trekking Poles", feeds "trekking-poles": one category (decision 107)
+                    && !perItem.contains(Labeler.categoryKey(g.catalog().listing(m.targetId()).orElseThrow().category()))) {
                 checked++;
                 grounded += m.grounding().grounded() ? 1 : 0;
             }

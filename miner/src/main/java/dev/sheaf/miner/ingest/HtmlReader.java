@@ -23,8 +23,10 @@ import org.jsoup.select.Elements;
  * one value row), {@code <dl>} dt/dd pairs and "Key: value" lines in paragraphs and list items;
  * other list items are bullets, other headings headings, other paragraphs text. Id from a meta tag
  * (product-id, sku, product:retailer_item_id), an {@code itemprop=sku} or {@code data-sku} /
- * {@code data-product-id} attribute, else the file name. Category from a meta tag or the
- * breadcrumb. Scripts, styles, templates, navigation, headers' menus and footers are ignored.
+ * {@code data-product-id} attribute, else a visible identifier line among the page's first
+ * {@link SpecLines#ID_LINES} fields ("SKU FH-000104 · Supplier: ...", "Item no.: ..."), else the
+ * file name. Category from a meta tag, the breadcrumb, else a visible category pair. Identifier
+ * pairs (SKU, supplier, model number ...) are never specs. Scripts, styles, templates, navigation, headers' menus and footers are ignored.
  */
 final class HtmlReader implements ListingReader {
     private static final String IGNORED = "script, style, noscript, template, iframe, svg, canvas, nav, footer, "
@@ -46,9 +48,9 @@ final class HtmlReader implements ListingReader {
         Document doc = Jsoup.parse(html);
         String id = firstNonBlank(meta(doc, "product-id"), meta(doc, "sku"), meta(doc, "product:retailer_item_id"),
                 attr(doc, "[itemprop=sku]", "content"), text(doc, "[itemprop=sku]"), attr(doc, "[data-sku]", "data-sku"),
-                attr(doc, "[data-product-id]", "data-product-id"), file.stem());
+                attr(doc, "[data-product-id]", "data-product-id"), null);
         String category = firstNonBlank(meta(doc, "category"), meta(doc, "product-category"), meta(doc, "product:category"),
-                breadcrumbCategory(doc), "");
+                breadcrumbCategory(doc), null);
         doc.select(IGNORED).remove();
         doc.select(BREADCRUMB).remove();
 
@@ -68,7 +70,8 @@ final class HtmlReader implements ListingReader {
             file.problem("", "empty", "the page has no title, headings, text or specs; expected a product page");
             return;
         }
-        file.emit(new Listing(id, category, file.display(), "", fields));
+        file.emit(new Listing(firstNonBlank(id, walk.ids.id(), file.stem()), firstNonBlank(category, walk.ids.category(), ""),
+                file.display(), "", fields));
     }
 
     /** The charset a page declares in a meta tag, found by Tika's HTML detector. */
@@ -87,6 +90,7 @@ final class HtmlReader implements ListingReader {
         private final String description;
         private boolean titleSkipped;
         private final Set<String> seenSpecs = new LinkedHashSet<>();
+        final SpecLines.Identifiers ids = new SpecLines.Identifiers();
 
         Walk(List<Field> fields, String title, String description) {
             this.fields = fields;
@@ -156,10 +160,12 @@ final class HtmlReader implements ListingReader {
                 if (l.isEmpty()) {
                     continue;
                 }
-                Field spec = SpecLines.spec(l);
-                if (spec != null) {
+                List<Field> pairs = SpecLines.pairs(l);
+                if (!pairs.isEmpty()) {
                     add(para, otherwise);
-                    spec(spec.key(), spec.text());
+                    for (Field pair : pairs) {
+                        spec(pair.key(), pair.text());
+                    }
                 } else {
                     if (para.length() > 0) {
                         para.append(' ');
@@ -190,9 +196,11 @@ final class HtmlReader implements ListingReader {
                 copy.select("ul, ol, dl, table").remove();
                 String t = textWithBreaks(copy).strip();
                 if (!t.isEmpty()) {
-                    Field spec = t.contains("\n") ? null : SpecLines.spec(t.replaceAll("\\s+", " "));
-                    if (spec != null) {
-                        spec(spec.key(), spec.text());
+                    List<Field> pairs = t.contains("\n") ? List.of() : SpecLines.pairs(t.replaceAll("\\s+", " "));
+                    if (!pairs.isEmpty()) {
+                        for (Field pair : pairs) {
+                            spec(pair.key(), pair.text());
+                        }
                     } else {
                         fields.add(Field.of(FieldKind.BULLET, t.replaceAll("\\s+", " ")));
                     }
@@ -254,6 +262,9 @@ final class HtmlReader implements ListingReader {
 
         private void spec(String key, String value) {
             if (key.isEmpty() || value.isEmpty()) {
+                return;
+            }
+            if (ids.take(Field.spec(key, value), fields.size() < SpecLines.ID_LINES)) {
                 return;
             }
             if (seenSpecs.add(key + "\u0000" + value)) {

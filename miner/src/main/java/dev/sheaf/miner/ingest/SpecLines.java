@@ -1,7 +1,9 @@
 package dev.sheaf.miner.ingest;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
+import java.util.Set;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
@@ -9,6 +11,12 @@ import java.util.regex.Pattern;
  * Turns plain lines into listing fields: {@code "Key: value"} (or {@code "Key<TAB>value"}, as
  * extracted tables come out) becomes a spec, {@code "- x"} / {@code "* x"} / {@code "• x"} a
  * bullet, a Markdown {@code #} line a heading, other lines are joined into paragraphs.
+ *
+ * <p>Identifier pairs ({@code SKU}, {@code Item no.}, {@code Category}, {@code Supplier},
+ * {@code Model no.} ...) name the listing or where it came from, not a property of the product:
+ * they give the listing id and category and never become specs (see {@link Identifier}). A line of
+ * several pairs joined by {@code ·}, {@code |}, {@code •} or a wide gap ("SKU FH-000104 · Supplier:
+ * Northwind") is split into its pairs, never read as one key. See docs/decisions/107.
  */
 final class SpecLines {
     /**
@@ -22,8 +30,149 @@ final class SpecLines {
     private static final Pattern HEADING = Pattern.compile("^\\s{0,3}(#{1,6})\\s+(.*?)\\s*#*\\s*$");
     private static final Pattern MD_LINK = Pattern.compile("\\[([^\\]]*)]\\([^)]*\\)");
     private static final Pattern MD_EMPHASIS = Pattern.compile("(\\*\\*|__|`)");
+    /** Between pairs on one line: a middle dot, bar or bullet, or a gap of two or more spaces. */
+    private static final Pattern PAIR_SEPARATOR = Pattern.compile("\\s*[·|•]\\s*| {2,}");
+    /** A key never holds these: a key that does was glued from several pairs. */
+    private static final Pattern GLUE = Pattern.compile("[·|•]");
+    /** An identifier value: one code-like token with a digit ("FH-000104", "A12/3"). */
+    private static final Pattern CODE = Pattern.compile("[\\p{L}\\p{N}][\\p{L}\\p{N}._/#-]*");
+    /** A sentence end inside a key ("...you need. Fiber content"): prose, not a key. */
+    private static final Pattern SENTENCE_IN_KEY = Pattern.compile("\\p{Ll}{4,}[.!?]\\s+\\p{Lu}");
+    /**
+     * The identifier and category lines a listing may start with are looked for in its first
+     * this many non-empty lines (documents) or fields (pages); further down, a quoted SKU is
+     * usually another product's (a spare part, a bundle).
+     */
+    static final int ID_LINES = 10;
 
     private SpecLines() {
+    }
+
+    /** What an identifier key names; {@link #of} is null for a key that names a property of the product. */
+    enum Identifier {
+        /** The listing's own id: SKU, item / article / product number. */
+        LISTING_ID,
+        /** The listing's category. */
+        CATEGORY,
+        /** Supplier, vendor, model or part number, barcode: bookkeeping, not a facet. */
+        OTHER;
+
+        private static final Set<String> IDS = Set.of("id", "sku", "skuno", "productid", "productno", "productnumber", "productcode",
+                "itemno", "itemnumber", "itemid", "articleno", "articlenumber", "artno", "artnr", "articlenr");
+        private static final Set<String> CATEGORIES = Set.of("category", "cat", "productcategory");
+        private static final Set<String> OTHERS = Set.of("supplier", "vendor", "suppliercode", "supplierref", "suppliersku",
+                "vendorsku", "modelno", "modelnumber", "styleno", "stylenumber", "partno", "partnumber", "mpn", "ean", "gtin", "upc",
+                "barcode");
+
+        /** The kind of identifier a key names, or null when it names a property. */
+        static Identifier of(String key) {
+            String k = ColumnMapping.norm(key);
+            if (IDS.contains(k)) {
+                return LISTING_ID;
+            }
+            if (CATEGORIES.contains(k)) {
+                return CATEGORY;
+            }
+            return OTHERS.contains(k) ? OTHER : null;
+        }
+    }
+
+    /**
+     * The listing id and category that identifier pairs name, first of each; every identifier
+     * pair is taken here, so that none becomes a spec. Not thread-safe: one per listing.
+     */
+    static final class Identifiers {
+        private String id;
+        private String category;
+
+        /**
+         * Takes an identifier pair: true when {@code pair} names the listing or its source (then it is
+         * not a spec), false for a property of the product. An id counts only when {@code early}
+         * (within {@link #ID_LINES}).
+         */
+        boolean take(Field pair, boolean early) {
+            Identifier kind = Identifier.of(pair.key());
+            if (kind == null) {
+                return false;
+            }
+            if (kind == Identifier.LISTING_ID && id == null && early) {
+                id = pair.text();
+            } else if (kind == Identifier.CATEGORY && category == null) {
+                category = pair.text();
+            }
+            return true;
+        }
+
+        String id() {
+            return id;
+        }
+
+        String category() {
+            return category;
+        }
+    }
+
+    /**
+     * The pairs a line states: one "Key: value" spec, or several when pairs are joined by
+     * {@code ·}, {@code |}, {@code •} or a gap of two or more spaces and every part is a pair; an
+     * identifier part may go without a colon ("SKU FH-000104", "ITEM NO. FH-1", and beside it
+     * "CAT. Tents"). Empty when the line is not pairs.
+     */
+    static List<Field> pairs(String line) {
+        List<Field> out = new ArrayList<>();
+        boolean listingId = false;
+        boolean bareOther = false;
+        for (String part : PAIR_SEPARATOR.split(line.strip())) {
+            if (part.isBlank()) {
+                continue;
+            }
+            Field f = spec(part);
+            boolean bare = f == null;
+            if (bare) {
+                f = bareIdentifier(part);
+                if (f == null) {
+                    out.clear();
+                    break;
+                }
+            }
+            Identifier kind = Identifier.of(f.key());
+            listingId |= kind == Identifier.LISTING_ID;
+            bareOther |= bare && kind != Identifier.LISTING_ID;
+            out.add(f);
+        }
+        // a bare "CAT. Tents" or "Supplier Northwind" counts only beside a listing id
+        if (!out.isEmpty() && (listingId || !bareOther)) {
+            return out;
+        }
+        Field whole = spec(line);
+        return whole == null ? List.of() : List.of(whole);
+    }
+
+    /**
+     * An identifier named without a colon: a known identifier key of one to three words, then
+     * the value. A listing id must look like a code ("SKU FH-000104"); "Item no longer sold" is
+     * not one.
+     */
+    private static Field bareIdentifier(String part) {
+        String[] words = part.strip().split("\\s+");
+        for (int n = 1; n <= Math.min(3, words.length - 1); n++) {
+            String key = String.join(" ", Arrays.copyOfRange(words, 0, n));
+            Identifier kind = Identifier.of(key);
+            if (kind == null) {
+                continue;
+            }
+            String value = String.join(" ", Arrays.copyOfRange(words, n, words.length));
+            if (kind == Identifier.LISTING_ID && !(n == words.length - 1 && CODE.matcher(value).matches()
+                    && value.chars().anyMatch(Character::isDigit))) {
+                return null;
+            }
+            return Field.spec(stripDot(key), value);
+        }
+        return null;
+    }
+
+    private static String stripDot(String key) {
+        return key.endsWith(".") ? key.substring(0, key.length() - 1) : key;
     }
 
     /** The spec a line states, or null. */
@@ -37,10 +186,16 @@ final class SpecLines {
         }
         String key = m.group(1).strip();
         String value = m.group(2).strip();
-        if (value.startsWith("//") || key.split("\\s+").length > 5 || value.isEmpty()) {
+        if (value.startsWith("//") || key.split("\\s+").length > 5 || value.isEmpty() || GLUE.matcher(key).find()
+                || SENTENCE_IN_KEY.matcher(key).find() || clockTime(key, value)) {
             return null;
         }
         return Field.spec(key, value);
+    }
+
+    /** "Boils 1 L in 4:09 min", "a 1:1 ratio": a colon between digits is a time or ratio, not a key's end. */
+    private static boolean clockTime(String key, String value) {
+        return Character.isDigit(key.charAt(key.length() - 1)) && Character.isDigit(value.charAt(0));
     }
 
     /** Listing id and category named by spec lines ("SKU: FH-1", "Category: tents"), then the other fields. */
@@ -49,14 +204,15 @@ final class SpecLines {
 
     /**
      * Reads plain or Markdown text. The title is the first {@code #} heading (Markdown) or else the
-     * first non-empty line; an {@code id}/{@code sku}/{@code product id} spec gives the listing id, a
-     * {@code category} spec the category (neither is kept as a spec).
+     * first non-empty line; an identifier pair ({@code SKU: FH-1}, {@code Item no. FH-1 · Category:
+     * Tents}, see {@link Identifier}) in the first {@link #ID_LINES} non-empty lines gives the
+     * listing id, a {@code category} pair the category; no identifier pair is kept as a spec.
      */
     static Parsed parse(String text, boolean markdown) {
         String[] lines = text.split("\\r\\n|\\r|\\n", -1);
         List<Field> fields = new ArrayList<>();
-        String id = null;
-        String category = null;
+        Identifiers ids = new Identifiers();
+        int nonEmpty = 0;
         String title = null;
         int titleLine = -1;
         if (markdown) {
@@ -92,6 +248,7 @@ final class SpecLines {
                 flush(para, fields);
                 continue;
             }
+            boolean early = ++nonEmpty <= ID_LINES;
             if (line.startsWith("\t")) {
                 // Extracted tables (Tika) put each cell on its own tab-indented line, rows apart
                 List<String> cells = new ArrayList<>();
@@ -103,7 +260,9 @@ final class SpecLines {
                 Field spec = cells.size() == 2 ? spec(cells.get(0) + "\t" + cells.get(1)) : null;
                 if (spec != null) {
                     flush(para, fields);
-                    fields.add(spec);
+                    if (!ids.take(spec, early)) {
+                        fields.add(spec);
+                    }
                     i = j - 1;
                     continue;
                 }
@@ -125,16 +284,13 @@ final class SpecLines {
             }
             Matcher b = BULLET.matcher(line);
             String content = clean(b.matches() ? b.group(1) : line, markdown);
-            Field spec = spec(content);
-            if (spec != null) {
+            List<Field> pairs = pairs(content);
+            if (!pairs.isEmpty()) {
                 flush(para, fields);
-                String k = ColumnMapping.norm(spec.key());
-                if (id == null && (k.equals("id") || k.equals("sku") || k.equals("productid") || k.equals("itemno"))) {
-                    id = spec.text();
-                } else if (category == null && k.equals("category")) {
-                    category = spec.text();
-                } else {
-                    fields.add(spec);
+                for (Field pair : pairs) {
+                    if (!ids.take(pair, early)) {
+                        fields.add(pair);
+                    }
                 }
             } else if (b.matches()) {
                 flush(para, fields);
@@ -147,7 +303,7 @@ final class SpecLines {
             }
         }
         flush(para, fields);
-        return new Parsed(id, category, fields);
+        return new Parsed(ids.id(), ids.category(), fields);
     }
 
     private static void flush(StringBuilder para, List<Field> fields) {

@@ -65,6 +65,8 @@ public final class Labeler {
     private final String[] conceptIds;
     private final String[] conceptFacet;
     private final FacetProperties[][] conceptFacetProps;
+    /** Per concept, the category keys where one of its facets applies; null when one applies everywhere. */
+    private final java.util.Set<String>[] conceptCategoryKeys;
     private final boolean[] conceptReview;
 
     private final NumberFacet[] numberFacets;
@@ -126,6 +128,9 @@ public final class Labeler {
         conceptIds = new String[n];
         conceptFacet = new String[n];
         conceptFacetProps = new FacetProperties[n][];
+        @SuppressWarnings("unchecked")
+        java.util.Set<String>[] categoryKeys = new java.util.Set[n];
+        conceptCategoryKeys = categoryKeys;
         conceptReview = new boolean[n];
         LabelTrie.Builder tb = LabelTrie.builder();
         int compiled = 0;
@@ -135,11 +140,20 @@ public final class Labeler {
             List<Concept> facets = vocabulary.facetsOf(c.id());
             conceptFacet[i] = facets.isEmpty() ? null : facets.get(0).id();
             conceptFacetProps[i] = new FacetProperties[facets.size()];
+            java.util.Set<String> catKeys = facets.isEmpty() ? null : new java.util.HashSet<>();
             for (int k = 0; k < facets.size(); k++) {
                 FacetProperties p = facets.get(k).facet();
                 conceptFacetProps[i][k] = p;
                 conceptReview[i] |= p.regulatedClaim();
+                if (p.categories().isEmpty()) {
+                    catKeys = null;
+                } else if (catKeys != null) {
+                    for (String x : p.categories()) {
+                        catKeys.add(categoryKey(x));
+                    }
+                }
             }
+            conceptCategoryKeys[i] = catKeys;
             for (ConceptLabel l : c.labels()) {
                 int[] path = labelPath(compileSegmenter, c.id(), l);
                 if (path != null) {
@@ -272,17 +286,10 @@ public final class Labeler {
         return path.toIntArray();
     }
 
+    /** As {@link #applies(FacetProperties, String)} for any of the concept's facets, with the category keys computed once. */
     private boolean applies(int concept, String category) {
-        FacetProperties[] ps = conceptFacetProps[concept];
-        if (ps.length == 0) {
-            return true;
-        }
-        for (FacetProperties p : ps) {
-            if (applies(p, category)) {
-                return true;
-            }
-        }
-        return false;
+        java.util.Set<String> keys = conceptCategoryKeys[concept];
+        return keys == null || category == null || category.isEmpty() || keys.contains(categoryKey(category));
     }
 
     /**
@@ -291,7 +298,47 @@ public final class Labeler {
      * as a category error and counts as applicable in fill rates.
      */
     public static boolean applies(FacetProperties facet, String category) {
-        return category == null || category.isEmpty() || facet.appliesTo(category);
+        if (category == null || category.isEmpty() || facet.appliesTo(category)) {
+            return true;
+        }
+        String key = categoryKey(category);
+        for (String c : facet.categories()) {
+            if (categoryKey(c).equals(key)) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    private static final java.util.concurrent.ConcurrentHashMap<String, String> CATEGORY_KEYS = new java.util.concurrent.ConcurrentHashMap<>();
+
+    /**
+     * A category name as compared and grouped: lower case (locale-free), every run of other
+     * characters than letters and digits one hyphen, "&amp;" read as "and" — so a spec sheet's
+     * "Sleeping Bags", a feed's "sleeping-bags" and "sleeping_bags" are one category (107).
+     */
+    public static String categoryKey(String category) {
+        if (category.length() > 200) {
+            return key(category);
+        }
+        return CATEGORY_KEYS.size() < 10_000 ? CATEGORY_KEYS.computeIfAbsent(category, Labeler::key) : key(category);
+    }
+
+    private static String key(String category) {
+        String s = category.replace("&", " and ").toLowerCase(java.util.Locale.ROOT);
+        StringBuilder b = new StringBuilder(s.length());
+        for (int i = 0; i < s.length(); i++) {
+            char ch = s.charAt(i);
+            if (Character.isLetterOrDigit(ch)) {
+                b.append(ch);
+            } else if (b.length() > 0 && b.charAt(b.length() - 1) != '-') {
+                b.append('-');
+            }
+        }
+        if (b.length() > 0 && b.charAt(b.length() - 1) == '-') {
+            b.setLength(b.length() - 1);
+        }
+        return b.toString();
     }
 
     /** A number facet as the labeler needs it. */

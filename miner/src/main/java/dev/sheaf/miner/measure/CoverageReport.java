@@ -239,6 +239,7 @@ public final class CoverageReport {
 
         final Object2IntOpenHashMap<String> categoryIndex = new Object2IntOpenHashMap<>();
         final List<String> categoryNames = new ArrayList<>();
+        private final Object2IntOpenHashMap<String> categorySpellings = new Object2IntOpenHashMap<>();
         final Object2IntOpenHashMap<String> sourceIndex = new Object2IntOpenHashMap<>();
         final List<String> sourceNames = new ArrayList<>();
         final IntArrayList perCategory = new IntArrayList();
@@ -291,11 +292,16 @@ public final class CoverageReport {
         }
 
         private static int index(Object2IntOpenHashMap<String> idx, List<String> names, IntArrayList counts, String key) {
+            return index(idx, names, counts, key, key);
+        }
+
+        /** The row of {@code key}, named by the first {@code name} seen with it. */
+        private static int index(Object2IntOpenHashMap<String> idx, List<String> names, IntArrayList counts, String key, String name) {
             int i = idx.getInt(key);
             if (i < 0) {
                 i = names.size();
                 idx.put(key, i);
-                names.add(key);
+                names.add(name);
                 counts.add(0);
             }
             counts.set(i, counts.getInt(i) + 1);
@@ -304,7 +310,13 @@ public final class CoverageReport {
 
         void add(Assignments a) {
             int i = n++;
-            int cat = index(categoryIndex, categoryNames, perCategory, a.category());
+            // "Sleeping Bags" from a spec sheet and "sleeping-bags" from a feed are one category (107),
+            // named by its commonest spelling
+            int cat = index(categoryIndex, categoryNames, perCategory, Labeler.categoryKey(a.category()), a.category());
+            int spelt = categorySpellings.addTo(a.category(), 1) + 1;
+            if (!categoryNames.get(cat).equals(a.category()) && spelt > categorySpellings.getInt(categoryNames.get(cat))) {
+                categoryNames.set(cat, a.category());
+            }
             int src = index(sourceIndex, sourceNames, perSource, a.source());
             if (a.isEmpty()) {
                 nothing++;
@@ -531,7 +543,7 @@ public final class CoverageReport {
                 long conflictsAll = 0;
                 List<FillRate> per = new ArrayList<>();
                 for (String cat : cats) {
-                    int k = categoryIndex.getInt(cat);
+                    int k = categoryIndex.getInt(Labeler.categoryKey(cat));
                     long size = perCategory.getInt(k);
                     long app = Labeler.applies(p, cat) ? size : 0;
                     long fl = filled.get(key(f, k));

@@ -242,4 +242,63 @@ class ReadersTest {
         assertEquals("Ängsmark Vest", r.byId("FH-E-2").title());
         assertTrue(r.problems().isEmpty(), r.problems().toString());
     }
+
+    @Test
+    void htmlVisibleSkuLineIsTheIdWhenNoTagNamesOneAndNoIdentifierIsASpec(@TempDir Path dir) throws IOException {
+        Path f = dir.resolve("fh-000104-tarn-bivy.html");
+        Files.writeString(f, """
+                <html><head><title>Tarn Bivy</title></head><body>
+                <h1>Tarn Bivy</h1>
+                <p class="sku">SKU FH-000104 &middot; Supplier: Northwind Outfitters</p>
+                <p>A one-person shelter.</p>
+                <table><tr><th>Weight</th><td>480 g</td></tr><tr><th>Model no.</th><td>NW-88</td></tr></table>
+                </body></html>
+                """, java.nio.charset.StandardCharsets.UTF_8);
+        Listing l = read(f).only();
+        assertEquals("FH-000104", l.id(), "the visible SKU line, not the file name");
+        assertEquals(List.of("Weight"), specKeys(l), "SKU, supplier and model number are not specs");
+        assertEquals(List.of("A one-person shelter."), texts(l, FieldKind.TEXT));
+    }
+
+    @Test
+    void htmlTagIdWinsOverTheVisibleLineAndALateSkuIsNotTheId(@TempDir Path dir) throws IOException {
+        Path tagged = dir.resolve("a.html");
+        Files.writeString(tagged, "<html><body><article data-sku=\"FH-1\"><h1>Pack</h1><p>SKU FH-2 &middot; Supplier: X</p>"
+                + "<p>Roomy.</p></article></body></html>", java.nio.charset.StandardCharsets.UTF_8);
+        assertEquals("FH-1", read(tagged).only().id());
+        StringBuilder late = new StringBuilder("<html><body><h1>Pack</h1><ul>");
+        for (int i = 0; i < SpecLines.ID_LINES + 1; i++) {
+            late.append("<li>Feature ").append(i).append("</li>");
+        }
+        late.append("</ul><p>Spare buckle: SKU FH-9</p></body></html>");
+        Path f = dir.resolve("fh-000007-pack.html");
+        Files.writeString(f, late.toString(), java.nio.charset.StandardCharsets.UTF_8);
+        assertEquals("fh-000007-pack", read(f).only().id(), "a SKU far down the page is another product's: the file name");
+    }
+
+    @Test
+    void pdfSkuAndCategoryLineGivesIdAndCategory(@TempDir Path dir) throws IOException {
+        Path f = Fixtures.write(dir, "fh-000201-spec-sheet.pdf", Fixtures.pdf(List.of("Northwind  \u00b7  Product specification sheet",
+                "Tarn Bivy", "SKU FH-000201  \u00b7  Category: Shelters", "Weight: 480 g"), null));
+        Listing l = read(f).only();
+        assertEquals("FH-000201", l.id());
+        assertEquals("Shelters", l.category());
+        assertEquals(List.of("Weight"), specKeys(l));
+    }
+
+    @Test
+    void docxItemNumberLineGivesIdAndCategoryWithOrWithoutColons(@TempDir Path dir) throws IOException {
+        Path f = Fixtures.write(dir, "fh-001010-pack.docx", Fixtures.docx("Alder 40 Pack",
+                List.of("Item no.: FH-001010    Category: Backpacks", "A pack for long weekends."), List.<String[]>of(new String[] {"Weight", "1.4 kg"})));
+        Listing l = read(f).only();
+        assertEquals("FH-001010", l.id(), "not 'FH-001010    Category: Backpacks'");
+        assertEquals("Backpacks", l.category());
+        assertEquals(List.of("Weight"), specKeys(l));
+        Path q = Fixtures.write(dir, "fh-000358-pack.docx", Fixtures.docx("Skelda Pack",
+                List.of("ITEM NO. FH-000358    CAT. Backpacks", "Roomy."), List.<String[]>of(new String[] {"Weight", "1.1 kg"})));
+        Listing k = read(q).only();
+        assertEquals("FH-000358", k.id(), "not the file name");
+        assertEquals("Backpacks", k.category());
+        assertEquals(List.of("Weight"), specKeys(k));
+    }
 }

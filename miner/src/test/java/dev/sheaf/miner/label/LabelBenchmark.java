@@ -181,7 +181,8 @@ public final class LabelBenchmark {
         long c0 = cpuNanos();
         long t0 = System.nanoTime();
         AtomicLong out = new AtomicLong();
-        int chunk = 1000;
+        // small enough that a short pass (the regex sample) still spreads over every thread
+        int chunk = Math.max(1, Math.min(1000, ls.size() / (pool.getParallelism() * 16)));
         pool.submit(() -> IntStream.range(0, (ls.size() + chunk - 1) / chunk).parallel().forEach(k -> {
             long n = 0;
             for (int i = k * chunk; i < Math.min(ls.size(), (k + 1) * chunk); i++) {

@@ -321,6 +321,16 @@ class LabelerTest {
     }
 
     @Test
+    void categoriesMatchWhateverTheirCaseAndSeparators() {
+        assertTrue(only(text("Footwear", "non-slip sole"), "non-slip").applies(), "a spec sheet's 'Footwear' is the vocabulary's 'footwear'");
+        assertFalse(only(text("Rain Jackets", "non-slip cuffs"), "non-slip").applies());
+        assertEquals("sleeping-bags", Labeler.categoryKey("Sleeping Bags"));
+        assertEquals("sleeping-bags", Labeler.categoryKey("sleeping_bags"));
+        assertEquals("stoves-and-cookware", Labeler.categoryKey("Stoves & Cookware"));
+        assertEquals(Labeler.categoryKey("SLEEPING BAGS"), Labeler.categoryKey("sleeping-bags"));
+    }
+
+    @Test
     void aListingWithNoCategoryIsNeverACategoryError() {
         Assignment a = only(text("", "non-slip cuffs"), "non-slip");
         assertTrue(a.applies(), "the category is unknown, not wrong");

@@ -9,6 +9,7 @@ import dev.sheaf.miner.label.Assignment;
 import dev.sheaf.miner.label.Assignments;
 import dev.sheaf.miner.label.Evidence;
 import dev.sheaf.miner.label.InvalidValue;
+import dev.sheaf.miner.label.Labeler;
 import dev.sheaf.miner.label.LabelFixtures;
 import dev.sheaf.miner.label.Polarity;
 import dev.sheaf.miner.text.SegmentPart;
@@ -42,13 +43,13 @@ class CoverageReportTest {
                 double v = Double.parseDouble(it.substring(it.indexOf('=') + 1));
                 String bucket = vocab.concept(facet).orElseThrow().facet().bucketFor(v).map(b -> b.label()).orElse(null);
                 as.add(new Assignment(facet, facet, Polarity.STATED, List.of(NUM), v, v, "kg", bucket,
-                        vocab.concept(facet).orElseThrow().facet().appliesTo(category), false));
+                        Labeler.applies(vocab.concept(facet).orElseThrow().facet(), category), false));
             } else {
                 boolean neg = it.startsWith("!");
                 String c = neg ? it.substring(1) : it;
                 var facet = vocab.facetOf(c).orElseThrow();
                 as.add(new Assignment(c, facet.id(), neg ? Polarity.NEGATED : Polarity.STATED, List.of(neg ? NEG : EV), null, null,
-                        null, null, facet.facet().appliesTo(category), false));
+                        null, null, Labeler.applies(facet.facet(), category), false));
             }
         }
         as.sort(java.util.Comparator.comparing(Assignment::conceptId).thenComparing(a -> a.value() == null ? 0 : a.value()));
@@ -174,6 +175,18 @@ class CoverageReportTest {
         assertEquals(1, r.listingsWithNothing());
         assertEquals(List.of("J4"), r.nothingExamples());
         assertEquals(2, r.listingsWithoutLabels(), "J3 only negates, J4 has nothing");
+    }
+
+    @Test
+    void spellingsOfOneCategoryAreOneRowNamedByTheCommonest() {
+        // a spec sheet's "Jackets" and a feed's "jackets" are one category (decision 107); the hood facet applies to both
+        CoverageReport r = CoverageReport.of(vocab, CoverageOptions.defaults(), List.of(
+                listing("S1", "Jackets", "sheet.pdf", "hooded"),
+                listing("J1", "jackets", "a.csv", "hooded"),
+                listing("J2", "jackets", "a.csv"),
+                listing("T1", "tents", "b.csv")), List.of());
+        assertEquals(Map.of("jackets", 3L, "tents", 1L), r.categories());
+        assertEquals(2.0 / 3, fill(r, "hood", "jackets").rate(), 1e-12, "S1 and J1 of the three jackets");
     }
 
     @Test
