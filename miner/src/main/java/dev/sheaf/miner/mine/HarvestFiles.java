@@ -107,7 +107,7 @@ public final class HarvestFiles {
                 Harvest.Scores s = c.scores();
                 csv.row(c.rank(), c.term(), c.n(), c.frequency(), c.df(), c.dfShare(), c.score(), s.termhood(), s.cValue(),
                         s.pmi(), s.npmi(), s.llr(), s.tScore(), s.chi2(), c.groupKey(), categories(c.topCategories()),
-                        c.evidence().isEmpty() ? "" : kwic(c.evidence().get(0)));
+                        c.evidence().isEmpty() ? "" : c.evidence().get(0).oneLine());
             }
             csv.flush();
         });
@@ -154,10 +154,4 @@ public final class HarvestFiles {
         b.append(d.toPlainString());
     }
 
-    /** "left [match] right — source locator". */
-    static String kwic(EvidenceLine e) {
-        String where = e.locator().isEmpty() ? e.source() : e.source() + " " + e.locator();
-        return (e.left().isEmpty() ? "" : e.left() + " ") + "[" + e.match() + "]" + (e.right().isEmpty() ? "" : " " + e.right())
-                + " — " + where;
-    }
 }

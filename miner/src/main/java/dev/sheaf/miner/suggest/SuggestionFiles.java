@@ -137,7 +137,7 @@ public final class SuggestionFiles {
                 List<String> kinds = new ArrayList<>();
                 s.support().forEach(x -> kinds.add(x.kind().word() + " " + fixed(x.score())));
                 csv.row(++rank, "merge", s.kind().word(), fixed(s.score()), String.join(" | ", ms), String.join(" | ", s.conceptIds()),
-                        String.join("; ", kinds), s.reason(), String.join("; ", counts), s.evidence().isEmpty() ? "" : kwic(s.evidence().get(0)));
+                        String.join("; ", kinds), s.reason(), String.join("; ", counts), s.evidence().isEmpty() ? "" : s.evidence().get(0).oneLine());
             }
             rank = 0;
             for (HierarchySuggestion s : parents) {
@@ -146,7 +146,7 @@ public final class SuggestionFiles {
                 csv.row(++rank, "parent", s.kind().word(), fixed(s.score()), s.parent().shown() + " > " + s.child().shown(),
                         concepts.equals(" > ") ? "" : concepts, s.kind().word(), s.reason(),
                         String.format(Locale.ROOT, "parent %d, child %d, both %d", s.counts().parentListings(), s.counts().childListings(),
-                                s.counts().bothListings()), s.evidence().isEmpty() ? "" : kwic(s.evidence().get(0)));
+                                s.counts().bothListings()), s.evidence().isEmpty() ? "" : s.evidence().get(0).oneLine());
             }
             csv.flush();
         });
@@ -157,9 +157,4 @@ public final class SuggestionFiles {
         return String.format(Locale.ROOT, "%.2f", v);
     }
 
-    /** "left [match] right — source locator". */
-    public static String kwic(EvidenceLine e) {
-        String where = e.locator().isEmpty() ? e.source() : e.source() + " " + e.locator();
-        return (e.left().isEmpty() ? "" : e.left() + " ") + "[" + e.match() + "]" + (e.right().isEmpty() ? "" : " " + e.right()) + " — " + where;
-    }
 }

@@ -71,6 +71,12 @@ public record EvidenceLine(String listingId, String source, String locator, Stri
         return b == null ? s : b.toString();
     }
 
+    /** The line on one row, as the CSV files write it: "left [match] right — source locator". */
+    public String oneLine() {
+        String where = locator.isEmpty() ? source : source + " " + locator;
+        return (left.isEmpty() ? "" : left + " ") + "[" + match + "]" + (right.isEmpty() ? "" : " " + right) + " — " + where;
+    }
+
     private static boolean isWs(char c) {
         return c == ' ' || c == '\t' || c == '\n' || c == '\r' || c == '\f' || c == '\u000B';
     }
