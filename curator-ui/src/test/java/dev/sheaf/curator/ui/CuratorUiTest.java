@@ -41,6 +41,11 @@ import org.testfx.util.WaitForAsyncUtils;
  * {@code target/screenshots/}.
  */
 class CuratorUiTest extends WindowTestBase {
+    @Start
+    void start(Stage stage) throws Exception {
+        showWindow(stage);
+    }
+
     @SuppressWarnings("unchecked")
     private TableView<CandidateRow> table(FxRobot robot) {
         return robot.lookup("#harvest-table").queryAs(TableView.class);

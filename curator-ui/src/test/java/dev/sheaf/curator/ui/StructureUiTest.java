@@ -51,6 +51,11 @@ import org.testfx.util.WaitForAsyncUtils;
  * Screenshots go to {@code target/screenshots/} (names starting with "s").
  */
 class StructureUiTest extends WindowTestBase {
+    @Start
+    void start(Stage stage) throws Exception {
+        showWindow(stage);
+    }
+
     @SuppressWarnings("unchecked")
     private TreeView<TreeNode> tree(FxRobot robot) {
         return robot.lookup("#hierarchy-tree").queryAs(TreeView.class);

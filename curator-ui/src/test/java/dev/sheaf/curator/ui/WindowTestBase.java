@@ -13,7 +13,6 @@ import org.junit.jupiter.api.extension.ExtendWith;
 import org.junit.jupiter.api.io.TempDir;
 import org.testfx.api.FxRobot;
 import org.testfx.framework.junit5.ApplicationExtension;
-import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;
 
 /** The whole curator window with every panel installed, as {@code ./sheaf curate} shows it, for the UI tests. */
@@ -25,8 +24,8 @@ abstract class WindowTestBase {
     MainView view;
     Stage stage;
 
-    @Start
-    void start(Stage stage) throws Exception {
+    /** Builds and shows the window; each test class calls it from its own {@code @Start} (TestFX looks for that method on the test class itself). */
+    void showWindow(Stage stage) throws Exception {
         this.stage = stage;
         vm = CuratorApp.newViewModel(new RecentWorkspaces(Files.createTempDirectory("sheaf-config").resolve(RecentWorkspaces.FILE_NAME)));
         view = new MainView(vm);
