@@ -1,5 +1,6 @@
 package dev.sheaf.curator;
 
+import dev.sheaf.curator.session.Caution;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
@@ -281,7 +282,7 @@ class CuratorViewModelTest {
         Concept regulated = s.vocabulary().concepts().stream().filter(c -> DetailsViewModel.regulated(s.vocabulary(), c.id()))
                 .findFirst().orElseThrow();
         s.selection().selectConcept(regulated.id());
-        assertEquals(DetailsViewModel.REGULATED_CAUTION, h.vm.details().cautionProperty().get());
+        assertEquals(Caution.REGULATED_CLAIM, h.vm.details().cautionProperty().get());
         Concept plain = s.vocabulary().concepts().stream().filter(c -> !DetailsViewModel.regulated(s.vocabulary(), c.id()))
                 .findFirst().orElseThrow();
         s.selection().selectConcept(plain.id());

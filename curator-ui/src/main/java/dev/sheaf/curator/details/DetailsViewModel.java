@@ -1,5 +1,6 @@
 package dev.sheaf.curator.details;
 
+import dev.sheaf.curator.session.Caution;
 import dev.sheaf.curator.session.CuratorSession;
 import dev.sheaf.curator.session.Selection;
 import dev.sheaf.miner.mine.Harvest;
@@ -23,12 +24,6 @@ import javafx.collections.ObservableList;
  * labels, place and notes, with the caution for regulated-claim facets.
  */
 public final class DetailsViewModel {
-    /** The caution shown wherever a regulated-claim facet is involved. */
-    public static final String REGULATED_CAUTION = "Regulated claim. Attribute labels mined from text are not verified product"
-            + " claims: a listing saying it does not make it so. Values of this facet (waterproof ratings, flame resistance,"
-            + " UV protection, child safety, fibre content) follow the applicable labelling rules and need compliance review"
-            + " before they are shown to shoppers.";
-
     /** One line of the details: a name and its value. */
     public record Fact(String name, String value) {
     }
@@ -90,7 +85,7 @@ public final class DetailsViewModel {
                         + (x.reason() != null ? " — " + x.reason() : "");
                 f.add(new Fact("Decision", what));
                 if (x.concept() != null) {
-                    cautionText = regulated(v, x.concept()) ? REGULATED_CAUTION : "";
+                    cautionText = regulated(v, x.concept()) ? Caution.REGULATED_CLAIM : "";
                 }
             } else {
                 List<Concept> with = v.conceptsWithLabel(Label.of(term, v.defaultLanguage()));
@@ -99,7 +94,7 @@ public final class DetailsViewModel {
                                 .collect(Collectors.joining(", "))));
                 for (Concept c : with) {
                     if (regulated(v, c.id())) {
-                        cautionText = REGULATED_CAUTION;
+                        cautionText = Caution.REGULATED_CLAIM;
                     }
                 }
             }
@@ -139,7 +134,7 @@ public final class DetailsViewModel {
                 if (c.provenance() != null && c.provenance().harvestTerm() != null) {
                     f.add(new Fact("From the harvest", "\"" + c.provenance().harvestTerm() + "\""));
                 }
-                cautionText = regulated(v, id) ? REGULATED_CAUTION : "";
+                cautionText = regulated(v, id) ? Caution.REGULATED_CLAIM : "";
             }
         } else {
             heading.set("Nothing selected");

@@ -1,6 +1,6 @@
 package dev.sheaf.curator.figures;
 
-import dev.sheaf.curator.hierarchy.Caution;
+import dev.sheaf.curator.session.Caution;
 import dev.sheaf.curator.hierarchy.HierarchyView;
 import java.util.Locale;
 import java.util.Objects;

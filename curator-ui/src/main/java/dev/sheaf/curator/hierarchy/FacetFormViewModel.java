@@ -1,5 +1,6 @@
 package dev.sheaf.curator.hierarchy;
 
+import dev.sheaf.curator.session.Caution;
 import dev.sheaf.curator.session.CuratorSession;
 import dev.sheaf.vocab.Concept;
 import dev.sheaf.vocab.Edit;

@@ -1,5 +1,6 @@
 package dev.sheaf.curator.hierarchy;
 
+import dev.sheaf.curator.session.Caution;
 import dev.sheaf.curator.hierarchy.HierarchyViewModel.Placed;
 import dev.sheaf.curator.hierarchy.HierarchyViewModel.Prompt;
 import java.util.ArrayList;
@@ -90,18 +91,7 @@ public final class HierarchyView extends BorderPane {
         message.getStyleClass().add("status-message");
         message.textProperty().bind(vm.messageProperty());
         message.setWrapText(true);
-        Label caution = new Label("Regulated claim: labels mined from text are not verified product claims;"
-                + " they need human review and compliance review before they ship.");
-        caution.setId("hierarchy-caution");
-        caution.getStyleClass().add("caution");
-        caution.setWrapText(true);
-        caution.setMinHeight(Region.USE_PREF_SIZE);
-        caution.setTooltip(new Tooltip(Caution.REGULATED_CLAIM));
-        caution.setVisible(false);
-        caution.managedProperty().bind(caution.visibleProperty());
-        tree.getSelectionModel().selectedItemProperty().addListener((o, a, b) ->
-                caution.setVisible(b != null && b.getValue() != null && b.getValue().regulated()));
-        VBox bottom = new VBox(4, caution, message, hint);
+        VBox bottom = new VBox(4, message, hint);
         bottom.setPadding(new Insets(4, 6, 4, 6));
         setBottom(bottom);
     }

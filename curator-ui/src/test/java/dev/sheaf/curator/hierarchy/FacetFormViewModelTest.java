@@ -1,5 +1,6 @@
 package dev.sheaf.curator.hierarchy;
 
+import dev.sheaf.curator.session.Caution;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNull;

@@ -1,5 +1,6 @@
 package dev.sheaf.curator.ui;
 
+import dev.sheaf.curator.session.Caution;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
@@ -163,7 +164,7 @@ class CuratorUiTest extends WindowTestBase {
         robot.interact(() -> concepts.getSelectionModel().select(0));
         waitUntil(() -> !vm.evidence().searchingProperty().get());
         assertTrue(robot.lookup("#details-caution").queryLabeled().isVisible(), "the regulated-claim caution shows");
-        assertEquals(DetailsViewModel.REGULATED_CAUTION, robot.lookup("#details-caution").queryLabeled().getText());
+        assertEquals(Caution.REGULATED_CLAIM, robot.lookup("#details-caution").queryLabeled().getText());
         shot(robot, "06-regulated-concept");
         robot.interact(() -> vm.closeSession());
     }

@@ -10,7 +10,7 @@ import dev.sheaf.curator.app.CuratorApp;
 import dev.sheaf.curator.app.MainView;
 import dev.sheaf.curator.app.MainViewModel;
 import dev.sheaf.curator.checks.ChecksViewModel;
-import dev.sheaf.curator.hierarchy.Caution;
+import dev.sheaf.curator.session.Caution;
 import dev.sheaf.curator.hierarchy.TreeNode;
 import dev.sheaf.curator.session.CuratorSession;
 import dev.sheaf.curator.session.RecentWorkspaces;
@@ -166,13 +166,13 @@ class StructureUiTest extends WindowTestBase {
         select(robot, "fibre-content");
         robot.interact(() -> view.showSidePanel("Facet"));
         WaitForAsyncUtils.waitForFxEvents();
-        assertTrue(robot.lookup("#hierarchy-caution").queryLabeled().isVisible(), "the tree shows the caution under the selection");
+        assertEquals(Caution.REGULATED_CLAIM, robot.lookup("#details-caution").queryLabeled().getText(), "the details of the selection show the caution");
         assertTrue(robot.lookup("#claim-caution").queryLabeled().isVisible(), "the caution shows for fibre content");
         assertEquals(Caution.REGULATED_CLAIM, robot.lookup("#claim-caution").queryLabeled().getText());
         shot(robot, "s06-regulated-caution");
         select(robot, "colour");
         assertFalse(robot.lookup("#claim-caution").queryLabeled().isVisible());
-        assertFalse(robot.lookup("#hierarchy-caution").queryLabeled().isVisible());
+        assertFalse(robot.lookup("#details-caution").queryLabeled().isVisible());
 
         // the checks jump to the concept
         robot.interact(() -> view.showSidePanel("Checks"));

@@ -1,6 +1,6 @@
-package dev.sheaf.curator.hierarchy;
+package dev.sheaf.curator.session;
 
-/** The notice shown wherever a regulated-claim facet is selected or edited (DESIGN.md, "Cautions"). */
+/** The one notice shown wherever a regulated-claim facet is selected or edited (DESIGN.md, "Cautions"): the details pane, the facet form, the figures. */
 public final class Caution {
     /** The words of the notice. */
     public static final String REGULATED_CLAIM = "Regulated claim: labels mined from listing text are not verified product claims. "
