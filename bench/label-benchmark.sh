@@ -18,11 +18,8 @@ trap 'rm -rf "$WORK"' EXIT
 die() { echo "label-benchmark: $*" >&2; exit 1; }
 [ -x /usr/bin/time ] || die "/usr/bin/time is needed for peak memory (apt-get install time)"
 
-echo "label-benchmark: building (offline, tests not run) ..." >&2
-(cd "$ROOT" && mvn -o -q -B -pl miner -am test-compile dependency:build-classpath \
-    -Dmdep.outputFile="$WORK/cp.txt" -Dmdep.includeScope=test) >"$WORK/build.log" 2>&1 \
-  || { tail -n 30 "$WORK/build.log" >&2; die "build failed"; }
-CP="$ROOT/miner/target/test-classes:$ROOT/miner/target/classes:$ROOT/vocab/target/classes:$(cat "$WORK/cp.txt")"
+. "$ROOT/bench/lib.sh"
+bench_classpath miner
 
 if [ ! -s "$CORPUS" ]; then
   mkdir -p "$(dirname "$CORPUS")"

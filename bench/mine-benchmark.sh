@@ -23,11 +23,8 @@ mkdir -p "$CORPORA"
 die() { echo "mine-benchmark: $*" >&2; exit 1; }
 [ -x /usr/bin/time ] || die "/usr/bin/time is needed for peak memory (apt-get install time)"
 
-echo "mine-benchmark: building (offline, tests not run) ..." >&2
-(cd "$ROOT" && mvn -o -q -B -pl miner -am test-compile dependency:build-classpath \
-    -Dmdep.outputFile="$WORK/cp.txt" -Dmdep.includeScope=test) >"$WORK/build.log" 2>&1 \
-  || { tail -n 30 "$WORK/build.log" >&2; die "build failed"; }
-CP="$ROOT/miner/target/classes:$ROOT/miner/target/test-classes:$ROOT/vocab/target/classes:$(cat "$WORK/cp.txt")"
+. "$ROOT/bench/lib.sh"
+bench_classpath miner
 # the analysis-only row runs with the launcher's JVM flags for batch commands, so both Java rows compare alike
 read -r -a LOPTS <<< "$(SHEAF_JAVA_OPTS= SHEAF_JAVA_EXTRA= SHEAF_SHOW_JAVA_OPTS=1 "$ROOT/sheaf")"
 
