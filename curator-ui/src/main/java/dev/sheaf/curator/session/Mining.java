@@ -22,7 +22,6 @@ import java.util.Objects;
 import java.util.concurrent.CancellationException;
 import java.util.function.BooleanSupplier;
 import java.util.function.Consumer;
-import java.util.stream.Stream;
 
 /**
  * Background work on a workspace's listings, for the desktop: mine a harvest (and build the
@@ -82,7 +81,7 @@ public final class Mining {
         Harvester harvester = Harvester.builder().profile(analysis.profile()).options(HarvestOptions.builder().build())
                 .threads(threads).sources(sourceNames(ws))
                 .progress(phase -> progress.update(phase, -1, -1, -1)).build();
-        long total = totalBytes(ws);
+        long total = SourceSpec.totalBytes(ws.sources());
         Path out = ws.output();
         Files.createDirectories(out);
         try (Harvester.Run run = harvester.start();
@@ -114,7 +113,7 @@ public final class Mining {
         int threads = Math.max(1, Runtime.getRuntime().availableProcessors());
         Path dir = CuratorSession.evidenceFolder(ws);
         try (EvidenceIndex.Writer index = EvidenceIndex.writer(dir, analysis.analyzer())) {
-            IngestSummary read = read(ws, threads, totalBytes(ws), progress, cancelled, index);
+            IngestSummary read = read(ws, threads, SourceSpec.totalBytes(ws.sources()), progress, cancelled, index);
             progress.update("finishing the evidence index", -1, -1, read.listings());
             index.commit();
         }
@@ -151,15 +150,4 @@ public final class Mining {
         return names;
     }
 
-    private static long totalBytes(Workspace ws) {
-        long total = 0;
-        for (SourceSpec s : ws.sources()) {
-            try (Stream<Path> w = Files.walk(s.path())) {
-                total += w.filter(Files::isRegularFile).mapToLong(p -> p.toFile().length()).sum();
-            } catch (IOException | RuntimeException e) {
-                return -1;
-            }
-        }
-        return total;
-    }
 }

@@ -17,7 +17,6 @@ import java.util.Iterator;
 import java.util.List;
 import java.util.Set;
 import java.util.function.Consumer;
-import java.util.stream.Stream;
 
 /** {@link ListingFeed} over the ingest stage: the real readers, with their problem records. */
 final class IngestFeed implements ListingFeed {
@@ -123,15 +122,7 @@ final class IngestFeed implements ListingFeed {
 
         @Override
         public long totalBytes() {
-            long total = 0;
-            for (SourceSpec s : specs) {
-                try (Stream<Path> w = Files.walk(s.path())) {
-                    total += w.filter(Files::isRegularFile).mapToLong(p -> p.toFile().length()).sum();
-                } catch (IOException | RuntimeException e) {
-                    return -1;
-                }
-            }
-            return total;
+            return SourceSpec.totalBytes(specs);
         }
 
         @Override

@@ -1,8 +1,11 @@
 package dev.sheaf.miner.ingest;
 
+import java.io.IOException;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Objects;
+import java.util.stream.Stream;
 
 /**
  * One place to read listings from.
@@ -40,5 +43,21 @@ public record SourceSpec(Path path, List<String> include, List<String> exclude, 
         if (g == null || g.isBlank()) {
             throw new IllegalArgumentException("a glob pattern must not be empty; use \"**/*\" for every file");
         }
+    }
+
+    /**
+     * The bytes of every regular file under the sources (include and exclude globs not applied), for a
+     * progress bar's total; -1 when a folder cannot be walked, so the bar shows no total.
+     */
+    public static long totalBytes(List<SourceSpec> sources) {
+        long total = 0;
+        for (SourceSpec s : sources) {
+            try (Stream<Path> w = Files.walk(s.path())) {
+                total += w.filter(Files::isRegularFile).mapToLong(f -> f.toFile().length()).sum();
+            } catch (IOException | RuntimeException e) {
+                return -1;
+            }
+        }
+        return total;
     }
 }
