@@ -205,7 +205,7 @@ final class MineCommand implements Callable<Integer> {
         if (showProgress) {
             hb.progress(phase -> {
                 if (!phase.equals("analysing")) {
-                    err.println("sheaf mine: " + phase + " …");
+                    err.printf(Locale.ROOT, "sheaf mine: %s … (at %.2f s)%n", phase, (System.nanoTime() - t0) / 1e9);
                     err.flush();
                 }
             });

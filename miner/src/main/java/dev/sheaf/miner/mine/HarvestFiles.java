@@ -38,13 +38,123 @@ public final class HarvestFiles {
             "dimension", "base_unit", "numeric_rows", "min", "max");
 
     private static final ObjectMapper MAPPER = new ObjectMapper()
-            .enable(DeserializationFeature.FAIL_ON_NULL_FOR_PRIMITIVES);
+            .enable(DeserializationFeature.FAIL_ON_NULL_FOR_PRIMITIVES)
+            .addMixIn(Harvest.class, ParallelCandidates.class);
     private static final ObjectWriter WRITER;
 
+    /**
+     * Deepest nesting level whose entries each get a line of their own. Level 4 holds a candidate's
+     * evidence lines and top categories: each is written on one line ({@code { "listingId": …, "end": 5 }}),
+     * which keeps the file readable, diffable line by line per evidence line, and about 40% smaller
+     * (and as much faster to write) than one line per member.
+     */
+    static final int LINE_LEVELS = 4;
+
     static {
-        DefaultIndenter lf = new DefaultIndenter("  ", "\n");
-        DefaultPrettyPrinter pp = new DefaultPrettyPrinter().withObjectIndenter(lf).withArrayIndenter(lf);
-        WRITER = MAPPER.writer(pp);
+        WRITER = MAPPER.writer(new ShallowPrinter());
+    }
+
+    /**
+     * Pretty printing to {@link #LINE_LEVELS}: a line feed and two spaces per level for shallower
+     * entries, a space for deeper ones, so each evidence line and each top category is one line.
+     */
+    private static final class ShallowPrinter extends DefaultPrettyPrinter {
+        private static final long serialVersionUID = 1L;
+        private static final DefaultIndenter LF = new DefaultIndenter("  ", "\n");
+
+        ShallowPrinter() {
+            this(0);
+        }
+
+        /** A printer for a value written at {@code nesting} levels down (its entries one level deeper). */
+        ShallowPrinter(int nesting) {
+            super(com.fasterxml.jackson.core.util.Separators.createDefaultInstance()
+                    .withObjectFieldValueSpacing(com.fasterxml.jackson.core.util.Separators.Spacing.AFTER));
+            Indenter shallow = new Indenter() {
+                @Override
+                public void writeIndentation(com.fasterxml.jackson.core.JsonGenerator g, int level) throws IOException {
+                    if (level <= LINE_LEVELS) {
+                        LF.writeIndentation(g, level);
+                    } else {
+                        g.writeRaw(' ');
+                    }
+                }
+
+                @Override
+                public boolean isInline() {
+                    return false;
+                }
+            };
+            _objectIndenter = shallow;
+            _arrayIndenter = shallow;
+            _nesting = nesting;
+        }
+
+        private ShallowPrinter(ShallowPrinter base) {
+            super(base);
+        }
+
+        @Override
+        public ShallowPrinter createInstance() {
+            return new ShallowPrinter(this);
+        }
+
+        @Override
+        public void writeEndObject(com.fasterxml.jackson.core.JsonGenerator g, int entries) throws IOException {
+            if (_nesting > LINE_LEVELS) {
+                --_nesting;
+                g.writeRaw(" }");
+            } else {
+                super.writeEndObject(g, entries);
+            }
+        }
+
+        @Override
+        public void writeEndArray(com.fasterxml.jackson.core.JsonGenerator g, int values) throws IOException {
+            if (_nesting > LINE_LEVELS) {
+                --_nesting;
+                g.writeRaw(" ]");
+            } else {
+                super.writeEndArray(g, values);
+            }
+        }
+    }
+
+    /**
+     * The candidate list, serialised on all cores: each candidate is written to text on its own by a
+     * printer that starts at the list's depth, then the texts go out in rank order as raw values, so
+     * the bytes are exactly those of writing the list in one go (the candidates are ~95% of the file).
+     */
+    abstract static class ParallelCandidates {
+        @com.fasterxml.jackson.databind.annotation.JsonSerialize(using = CandidatesSerializer.class)
+        abstract List<Harvest.Candidate> candidates();
+    }
+
+    static final class CandidatesSerializer extends com.fasterxml.jackson.databind.JsonSerializer<List<Harvest.Candidate>> {
+        @Override
+        public void serialize(List<Harvest.Candidate> list, com.fasterxml.jackson.core.JsonGenerator g,
+                              com.fasterxml.jackson.databind.SerializerProvider provider) throws IOException {
+            boolean pretty = g.getPrettyPrinter() instanceof ShallowPrinter;
+            ObjectWriter element = pretty ? MAPPER.writer(new ShallowPrinter(g.getOutputContext().getNestingDepth() + 1))
+                    : MAPPER.writer();
+            String[] texts = new String[list.size()];
+            try {
+                java.util.stream.IntStream.range(0, texts.length).parallel().forEach(i -> {
+                    try {
+                        texts[i] = element.writeValueAsString(list.get(i));
+                    } catch (JsonProcessingException e) {
+                        throw new java.io.UncheckedIOException(e);
+                    }
+                });
+            } catch (java.io.UncheckedIOException e) {
+                throw e.getCause();
+            }
+            g.writeStartArray(list, texts.length);
+            for (String t : texts) {
+                g.writeRawValue(t);
+            }
+            g.writeEndArray();
+        }
     }
 
     private HarvestFiles() {

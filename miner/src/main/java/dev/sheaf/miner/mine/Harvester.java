@@ -27,7 +27,7 @@ import java.util.function.Consumer;
  */
 public final class Harvester {
 
-    /** Told when a phase starts: "analysing", "counting 2-grams", …, "scoring", "evidence", "writing". */
+    /** Told when a phase starts: "analysing", "counting 2-grams", …, "scoring", "evidence", "evidence lines", "spec facets", "building the harvest". */
     @FunctionalInterface
     public interface Progress {
         void phase(String name);

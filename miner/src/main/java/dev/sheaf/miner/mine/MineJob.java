@@ -324,8 +324,10 @@ final class MineJob {
             int[] selected = scoring.select(this::siteTemplate);
             progress.phase("evidence");
             FinalPass fin = finalPass(scoring, selected);
-            progress.phase("writing");
-            return scoring.build(selected, fin, specFacets());
+            progress.phase("spec facets");
+            List<Harvest.SpecFacet> facets = specFacets();
+            progress.phase("building the harvest");
+            return scoring.build(selected, fin, facets);
         }
 
         private void mergeUnigrams() {

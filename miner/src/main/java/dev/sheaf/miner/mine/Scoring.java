@@ -417,41 +417,46 @@ final class Scoring {
 
     // ------------------------------------------------------------------ the harvest
 
-    Harvest build(int[] selected, MineJob.FinalPass fin, List<Harvest.SpecFacet> specFacets) {
-        List<Harvest.Candidate> out = new ArrayList<>(selected.length);
-        int[] t = new int[HarvestOptions.MAX_NGRAM];
-        LogOdds logOdds = new LogOdds(fin.categories(), fin.categoryListings(), o.priorShare());
-        int[] catDf = new int[fin.categories().length];
-        for (int r = 0; r < selected.length; r++) {
-            int s = selected[r];
-            int p = survivor[s];
-            int m = pLevel[p];
-            int idx = pIdx[p];
-            long tf = c.tf(m, idx);
-            long df = c.df(m, idx);
-            Harvest.Scores scores;
-            if (m >= 2) {
-                c.tokensOf(m, idx, t);
-                Scores sc = scores(m, idx, t);
-                scores = new Harvest.Scores(sc.pmi, sc.npmi, sc.llr, sc.t, sc.chi2, cValue(m, idx), termhood(m, idx));
-            } else {
-                scores = new Harvest.Scores(null, null, null, null, null, null, termhood(m, idx));
-            }
-            Double score = Double.isInfinite(rankScore[s]) ? null : rankScore[s];
-            for (int k = 0; k < catDf.length; k++) {
-                catDf[k] = fin.counts().categoryDf(r, k);
-            }
-            List<Harvest.CategoryScore> top = logOdds.top(catDf, o.topCategories());
-            String term = term(s);
-            List<EvidenceLine> ev = new ArrayList<>();
-            for (EvidenceLine e : fin.evidence()[r]) {
-                if (e != null) {
-                    ev.add(e);
-                }
-            }
-            out.add(new Harvest.Candidate(r + 1, term, m, tf, df, (double) df / (double) listings, score, scores, top,
-                    Integrations.groupKey(term), ev));
+    /** The candidate of rank {@code r + 1}, survivor {@code s}. */
+    private Harvest.Candidate candidate(int r, int s, MineJob.FinalPass fin, LogOdds logOdds) {
+        int p = survivor[s];
+        int m = pLevel[p];
+        int idx = pIdx[p];
+        long tf = c.tf(m, idx);
+        long df = c.df(m, idx);
+        Harvest.Scores scores;
+        if (m >= 2) {
+            int[] t = new int[HarvestOptions.MAX_NGRAM];
+            c.tokensOf(m, idx, t);
+            Scores sc = scores(m, idx, t);
+            scores = new Harvest.Scores(sc.pmi, sc.npmi, sc.llr, sc.t, sc.chi2, cValue(m, idx), termhood(m, idx));
+        } else {
+            scores = new Harvest.Scores(null, null, null, null, null, null, termhood(m, idx));
         }
+        Double score = Double.isInfinite(rankScore[s]) ? null : rankScore[s];
+        int[] catDf = new int[fin.categories().length];
+        for (int k = 0; k < catDf.length; k++) {
+            catDf[k] = fin.counts().categoryDf(r, k);
+        }
+        List<Harvest.CategoryScore> top = logOdds.top(catDf, o.topCategories());
+        String term = term(s);
+        List<EvidenceLine> ev = new ArrayList<>();
+        for (EvidenceLine e : fin.evidence()[r]) {
+            if (e != null) {
+                ev.add(e);
+            }
+        }
+        return new Harvest.Candidate(r + 1, term, m, tf, df, (double) df / (double) listings, score, scores, top,
+                Integrations.groupKey(term), ev);
+    }
+
+    Harvest build(int[] selected, MineJob.FinalPass fin, List<Harvest.SpecFacet> specFacets) {
+        LogOdds logOdds = new LogOdds(fin.categories(), fin.categoryListings(), o.priorShare());
+        // candidates are independent of one another: built on all cores, kept in rank order
+        Harvest.Candidate[] built = new Harvest.Candidate[selected.length];
+        java.util.stream.IntStream.range(0, selected.length).parallel()
+                .forEach(r -> built[r] = candidate(r, selected[r], fin, logOdds));
+        List<Harvest.Candidate> out = Arrays.asList(built);
         List<Harvest.CategoryCount> cats = new ArrayList<>();
         String[] names = fin.categories();
         Integer[] order = new Integer[names.length];

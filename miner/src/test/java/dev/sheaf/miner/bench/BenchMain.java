@@ -50,6 +50,12 @@ public final class BenchMain {
                 JsonlListings.read(file, file.getFileName().toString(), run, System.err::println);
                 harvest = run.finish();
             }
+            long now = System.nanoTime();
+            long c = cpu();
+            System.err.printf("  %-18s %6.2f s wall %6.2f s cpu%n", phase[0], (now - phaseStart[0]) / 1e9, (c - cpuStart[0]) / 1e9);
+            phase[0] = "writing files";
+            phaseStart[0] = now;
+            cpuStart[0] = c;
             Files.createDirectories(out);
             HarvestFiles.write(harvest, out);
             System.err.printf("  %-18s %6.2f s wall %6.2f s cpu%n", phase[0], (System.nanoTime() - phaseStart[0]) / 1e9,
