@@ -113,6 +113,10 @@ final class MineCommand implements Callable<Integer> {
     @Option(names = "--keep-quantities", description = "Keep candidates made only of numbers and units (\"1.2 kg\").")
     boolean keepQuantities;
 
+    @Option(names = "--keep-headings", description = "Keep candidates seen almost only as whole section headings "
+            + "(\"Specifications\", \"Key features\"): parts of the page, dropped by default.")
+    boolean keepHeadings;
+
     @Option(names = {"-t", "--threads"}, paramLabel = "N", description = "Threads (default: one per core).")
     Integer threads;
 
@@ -182,7 +186,7 @@ final class MineCommand implements Callable<Integer> {
             prof = AnalysisProfile.resolve(p);
             opts = HarvestOptions.builder().ngramMax(ngramMax).minFrequency(minFrequency).minDf(minDf).maxDfShare(maxDfShare)
                     .minNpmi(minNpmi).rankBy(rankBy).evidence(evidence).limit(limit).dropNumbers(!keepNumbers)
-                    .dropQuantities(!keepQuantities).build();
+                    .dropQuantities(!keepQuantities).dropHeadings(!keepHeadings).build();
         } catch (ListingFeeds.Unavailable e) {
             err.println("sheaf mine: " + e.getMessage() + "; see README.md for what works today.");
             return ExitCodes.NOT_AVAILABLE;

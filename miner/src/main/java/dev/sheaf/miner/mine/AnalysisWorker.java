@@ -8,9 +8,11 @@ import dev.sheaf.miner.text.SegmentPart;
 import dev.sheaf.miner.text.SegmentSink;
 import it.unimi.dsi.fastutil.ints.IntArrayList;
 import it.unimi.dsi.fastutil.longs.LongArrayList;
+import it.unimi.dsi.fastutil.objects.Object2IntOpenHashMap;
 import java.nio.file.Path;
 import java.util.Arrays;
 import java.util.HashMap;
+import java.util.List;
 import java.util.Map;
 
 /**
@@ -40,6 +42,18 @@ final class AnalysisWorker implements SegmentSink {
     long segments;
     long tokens;
 
+    /**
+     * Section headings (decision 051): a heading field that is one segment of at most
+     * {@link HarvestOptions#MAX_NGRAM} tokens is a whole heading; every n-gram inside one (the whole
+     * heading too) is counted here by {@link #headingKey}, once per occurrence.
+     */
+    final Object2IntOpenHashMap<String> headings = new Object2IntOpenHashMap<>();
+    private List<Field> currentFields;
+    private int headingField = -1;
+    private int headingSegments;
+    private final int[] headingTokens = new int[HarvestOptions.MAX_NGRAM];
+    private int headingLength;
+
     private final Segmenter segmenter;
     private final MineJob job;
     private final Map<String, Integer> categoryCache = new HashMap<>();
@@ -63,7 +77,10 @@ final class AnalysisWorker implements SegmentSink {
         categories.add(cat.intValue());
         order.add(orderKey);
         offsetsLen = 0;
+        currentFields = l.fields();
+        headingField = -1;
         segmenter.analyze(l, this);
+        commitHeading();
         spill.write(l, (int) (orderKey >>> 32), offsets, offsetsLen);
         for (Field f : l.fields()) {
             if (f.kind() == FieldKind.SPEC) {
@@ -76,6 +93,16 @@ final class AnalysisWorker implements SegmentSink {
 
     @Override
     public void segment(int field, SegmentPart part, int[] ids, int[] starts, int[] ends, int length) {
+        if (currentFields.get(field).kind() == FieldKind.HEADING) {
+            if (field != headingField) {
+                commitHeading();
+                headingField = field;
+                headingSegments = 0;
+                headingLength = length <= HarvestOptions.MAX_NGRAM ? length : 0;
+                System.arraycopy(ids, 0, headingTokens, 0, headingLength);
+            }
+            headingSegments++;
+        }
         if (offsetsLen + 3 + 2 * length > offsets.length) {
             offsets = Arrays.copyOf(offsets, Math.max(offsets.length * 2, offsetsLen + 3 + 2 * length));
         }
@@ -106,6 +133,28 @@ final class AnalysisWorker implements SegmentSink {
         store.boundary();
         segments++;
         tokens += length;
+    }
+
+    private void commitHeading() {
+        if (headingField >= 0 && headingSegments == 1) {
+            for (int from = 0; from < headingLength; from++) {
+                for (int len = 1; from + len <= headingLength; len++) {
+                    headings.addTo(headingKey(headingTokens, from, len), 1);
+                }
+            }
+        }
+        headingField = -1;
+    }
+
+    /** The token ids t[from, from+len) as a map key: two chars per id. */
+    static String headingKey(int[] t, int from, int len) {
+        char[] k = new char[2 * len];
+        for (int i = 0; i < len; i++) {
+            int id = t[from + i];
+            k[2 * i] = (char) (id >>> 16);
+            k[2 * i + 1] = (char) id;
+        }
+        return new String(k);
     }
 
     private void grow(int id) {

@@ -10,14 +10,14 @@ import java.util.Objects;
  * appear in at most {@value #DEFAULT_MAX_DF_SHARE} of all listings (more is boilerplate); multi-word
  * candidates need NPMI above {@value #DEFAULT_MIN_NPMI} (their parts attract each other); candidates
  * made only of numbers, or only of numbers and units (quantities, harvested as spec values instead),
- * are dropped; ranked by {@link Score#TERMHOOD}; up to {@value #DEFAULT_LIMIT} candidates
+ * are dropped, and so are section headings ({@link #HEADING_SHARE}); ranked by {@link Score#TERMHOOD}; up to {@value #DEFAULT_LIMIT} candidates
  * (0 = all) with {@value #DEFAULT_EVIDENCE} evidence lines of about {@value #DEFAULT_EVIDENCE_WIDTH}
  * chars of context each side; the top {@value #DEFAULT_TOP_CATEGORIES} categories per candidate by
  * log-odds z with an informative Dirichlet prior worth {@value #DEFAULT_PRIOR_SHARE} of the listings;
  * up to {@value #DEFAULT_SPEC_VALUES} values per spec facet.
  */
 public record HarvestOptions(int ngramMax, int minFrequency, int minDf, double maxDfShare, double minNpmi,
-                             boolean dropNumbers, boolean dropQuantities, Score rankBy, int limit,
+                             boolean dropNumbers, boolean dropQuantities, boolean dropHeadings, Score rankBy, int limit,
                              int evidence, int evidenceWidth, int topCategories, double priorShare,
                              int specValues) {
     public static final int DEFAULT_NGRAM_MAX = 3;
@@ -41,6 +41,12 @@ public record HarvestOptions(int ngramMax, int minFrequency, int minDf, double m
      */
     public static final double TEMPLATE_SHARE = 0.9;
     public static final int TEMPLATE_MIN_LISTINGS = 50;
+    /**
+     * Section headings (decision 051): a candidate of which at least this share of occurrences are in
+     * a short heading of a page or sheet ("Specifications", "Key features", "Tech specs") names a part
+     * of the page, not of the product, and is dropped unless {@code dropHeadings} is off. [practice]
+     */
+    public static final double HEADING_SHARE = 0.9;
 
     public HarvestOptions {
         Objects.requireNonNull(rankBy, "rankBy");
@@ -85,6 +91,7 @@ public record HarvestOptions(int ngramMax, int minFrequency, int minDf, double m
         b.minNpmi = minNpmi;
         b.dropNumbers = dropNumbers;
         b.dropQuantities = dropQuantities;
+        b.dropHeadings = dropHeadings;
         b.rankBy = rankBy;
         b.limit = limit;
         b.evidence = evidence;
@@ -98,7 +105,7 @@ public record HarvestOptions(int ngramMax, int minFrequency, int minDf, double m
     /** Everything counted, nothing filtered beyond the frequency floor: for reference checks. */
     public static HarvestOptions everything(int ngramMax, int minFrequency) {
         return builder().ngramMax(ngramMax).minFrequency(minFrequency).minDf(1).maxDfShare(1).minNpmi(-1)
-                .dropNumbers(false).dropQuantities(false).rankBy(Score.FREQUENCY).limit(0).build();
+                .dropNumbers(false).dropQuantities(false).dropHeadings(false).rankBy(Score.FREQUENCY).limit(0).build();
     }
 
     public static final class Builder {
@@ -108,6 +115,7 @@ public record HarvestOptions(int ngramMax, int minFrequency, int minDf, double m
         private double maxDfShare = DEFAULT_MAX_DF_SHARE;
         private double minNpmi = DEFAULT_MIN_NPMI;
         private boolean dropNumbers = true;
+        private boolean dropHeadings = true;
         private boolean dropQuantities = true;
         private Score rankBy = Score.TERMHOOD;
         private int limit = DEFAULT_LIMIT;
@@ -144,6 +152,12 @@ public record HarvestOptions(int ngramMax, int minFrequency, int minDf, double m
 
         public Builder dropNumbers(boolean v) {
             dropNumbers = v;
+            return this;
+        }
+
+        /** Drop candidates that occur almost only as whole section headings (default on). */
+        public Builder dropHeadings(boolean v) {
+            dropHeadings = v;
             return this;
         }
 
@@ -189,7 +203,7 @@ public record HarvestOptions(int ngramMax, int minFrequency, int minDf, double m
 
         public HarvestOptions build() {
             return new HarvestOptions(ngramMax, minFrequency, minDf, maxDfShare, minNpmi, dropNumbers, dropQuantities,
-                    rankBy, limit, evidence, evidenceWidth, topCategories, priorShare, specValues);
+                    dropHeadings, rankBy, limit, evidence, evidenceWidth, topCategories, priorShare, specValues);
         }
     }
 }

@@ -295,6 +295,9 @@ final class MineJob {
         /** Levels 2..maxN. */
         private final FrequentTable[] levels = new FrequentTable[HarvestOptions.MAX_NGRAM + 1];
         private final long[] distinct = new long[HarvestOptions.MAX_NGRAM + 1];
+        /** Whole headings of all workers (decision 051). */
+        private final it.unimi.dsi.fastutil.objects.Object2IntOpenHashMap<String> headings =
+                new it.unimi.dsi.fastutil.objects.Object2IntOpenHashMap<>();
         private int levelsCounted = 1;
 
         private long listings;
@@ -336,6 +339,9 @@ final class MineJob {
                 for (int id = 0; id < n; id++) {
                     tf1[id] = Math.addExact(tf1[id], w.tf[id]);
                     df1[id] = Math.addExact(df1[id], w.df[id]);
+                }
+                for (it.unimi.dsi.fastutil.objects.Object2IntMap.Entry<String> e : w.headings.object2IntEntrySet()) {
+                    headings.addTo(e.getKey(), e.getIntValue());
                 }
                 listings += w.categories.size();
                 fields += w.fields;
@@ -703,6 +709,11 @@ final class MineJob {
         }
 
         // accessors for Scoring
+        /** How often the tokens t[0, len) occurred inside a whole section heading (decision 051). */
+        int wholeHeadings(int[] t, int len) {
+            return headings.isEmpty() ? 0 : headings.getInt(AnalysisWorker.headingKey(t, 0, len));
+        }
+
         MineJob outer() {
             return MineJob.this;
         }

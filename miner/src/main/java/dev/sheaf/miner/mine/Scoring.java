@@ -258,6 +258,10 @@ final class Scoring {
                     continue;
                 }
             }
+            // a part of the page, not of the product: nearly every occurrence is in a section heading (decision 051)
+            if (o.dropHeadings() && c.wholeHeadings(t, m) >= HarvestOptions.HEADING_SHARE * c.tf(m, idx)) {
+                continue;
+            }
             Scores sc = null;
             if (m >= 2 && o.minNpmi() > -1) {
                 sc = scores(m, idx, t);

@@ -220,6 +220,40 @@ class HarvesterTest {
         assertTrue(all.contains("hollowmere traders"), all.toString());
     }
 
+    /** Decision 051: a term seen (nearly) only as a whole section heading is a part of the page, not an attribute. */
+    @Test
+    void sectionHeadingsAreDroppedButAttributesThatAreAlsoHeadingsStay() {
+        List<Listing> listings = new ArrayList<>();
+        for (int i = 0; i < 40; i++) {
+            List<Field> fields = new ArrayList<>();
+            fields.add(Field.of(FieldKind.TITLE, (i % 2 == 0 ? "ripstop nylon tent " : "cotton canvas tent ") + i));
+            fields.add(Field.of(FieldKind.HEADING, "Key features"));
+            fields.add(Field.of(FieldKind.BULLET, i % 3 == 0 ? "insulated hood" : "two way zip"));
+            if (i % 4 == 0) {
+                fields.add(Field.of(FieldKind.HEADING, "Insulated hood")); // a heading, but mostly seen in bullets
+            }
+            // a heading that is two segments is not a section heading
+            fields.add(Field.of(FieldKind.HEADING, "Care; storage"));
+            fields.add(Field.of(FieldKind.TEXT, i % 5 == 0 ? "storage sack included" : "pitch in minutes"));
+            listings.add(new Listing("p" + i, "tents", "site/p" + i + ".html", "", fields));
+        }
+        HarvestOptions on = HarvestOptions.builder().minFrequency(2).minDf(2).limit(0).maxDfShare(1).build();
+        Set<String> terms = mine(listings, on, 2, 256L << 20).candidates().stream().map(Harvest.Candidate::term)
+                .collect(Collectors.toSet());
+        assertFalse(terms.contains("key features"), "section heading kept: " + terms);
+        assertFalse(terms.contains("features"), "a word only seen in a heading is a part of the page: " + terms);
+        assertFalse(terms.contains("key"), "a word only seen in a heading is a part of the page: " + terms);
+        // 10 of 24 occurrences of "insulated hood" are headings: far below 0.9, an attribute
+        assertTrue(terms.contains("insulated hood"), terms.toString());
+        // "care" and "storage" are each one segment of a two-segment heading, so neither is in a section heading
+        assertTrue(terms.contains("storage"), terms.toString());
+        assertTrue(terms.contains("care"), terms.toString());
+        Set<String> kept = mine(listings, HarvestOptions.builder().minFrequency(2).minDf(2).limit(0).maxDfShare(1)
+                .dropHeadings(false).build(), 1, 256L << 20).candidates().stream().map(Harvest.Candidate::term)
+                .collect(Collectors.toSet());
+        assertTrue(kept.contains("key features"), kept.toString());
+    }
+
     @Test
     void evidenceLinesAreTheFirstListingsInSourceOrderWithExactOffsets() {
         Harvest h = mine(CATALOG, HarvestOptions.builder().minFrequency(2).minDf(1).limit(200).evidence(3).build(), 2, 256L << 20);
