@@ -25,8 +25,9 @@ die() { echo "mine-benchmark: $*" >&2; exit 1; }
 
 . "$ROOT/bench/lib.sh"
 bench_classpath miner
-# the analysis-only row runs with the launcher's JVM flags for batch commands, so both Java rows compare alike
-read -r -a LOPTS <<< "$(SHEAF_JAVA_OPTS= SHEAF_JAVA_EXTRA= SHEAF_SHOW_JAVA_OPTS=1 "$ROOT/sheaf")"
+# the analysis-only row runs with the JVM flags the launcher gives `sheaf mine` on the same input
+# (they depend on its size: the quick compiler only below 100 MB), so both Java rows compare alike
+launcher_opts() { SHEAF_JAVA_OPTS= SHEAF_JAVA_EXTRA= SHEAF_SHOW_JAVA_OPTS=1 "$ROOT/sheaf" mine "$1"; }
 
 # The ingest stage decides how sheaf mine is run: through the launcher once it exists, else through
 # the benchmark driver with a test-only JSONL reader (same Harvester, same outputs).
@@ -98,6 +99,8 @@ for n in "${SIZES[@]}"; do
   f="$(corpus "$n")"
   if [ "$INGEST" = 1 ] && [ "$WARM" = 0 ]; then warmup "$f"; WARM=1; fi
   if [ -d "$f" ]; then bytes=$(du -sb "$f" | cut -f1); else bytes=$(stat -L -c %s "$f"); fi
+  read -r -a LOPTS <<< "$(launcher_opts "$f")"
+  echo "$n: JVM flags of the Java rows: ${LOPTS[*]}" >&2
   # 1. floor: read every byte once (also warms the page cache for everyone after it)
   if [ -d "$f" ]; then
     measure read "$n" "$bytes" "read every byte (cat)" sh -c "find '$f' -type f -exec cat {} + > /dev/null"
