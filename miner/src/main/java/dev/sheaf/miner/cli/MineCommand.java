@@ -113,7 +113,7 @@ final class MineCommand implements Callable<Integer> {
     @Option(names = "--keep-quantities", description = "Keep candidates made only of numbers and units (\"1.2 kg\").")
     boolean keepQuantities;
 
-    @Option(names = "--keep-headings", description = "Keep candidates seen almost only as whole section headings "
+    @Option(names = "--keep-headings", description = "Keep candidates seen almost only in short section headings "
             + "(\"Specifications\", \"Key features\"): parts of the page, dropped by default.")
     boolean keepHeadings;
 
