@@ -49,6 +49,19 @@ final class DecodingReader extends Reader {
         return charset;
     }
 
+    /**
+     * The byte stream itself, for a reader that parses bytes (JSON Lines in UTF-8), or null once any
+     * char has been read; positioned after the byte-order mark, {@link #byteBase()} bytes into the file.
+     */
+    InputStream undecoded() {
+        return consumed == 0 && !eof && !bytes.hasRemaining() && !chars.hasRemaining() ? in : null;
+    }
+
+    /** Bytes of the file before the stream's start (the byte-order mark). */
+    long byteBase() {
+        return byteBase;
+    }
+
     /** Undecodable byte sequences met so far (each became one U+FFFD). */
     long malformed() {
         return malformed;

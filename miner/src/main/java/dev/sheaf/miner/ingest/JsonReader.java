@@ -12,6 +12,8 @@ import com.fasterxml.jackson.databind.ObjectReader;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.BufferedReader;
 import java.io.IOException;
+import java.io.InputStream;
+import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
@@ -59,6 +61,14 @@ final class JsonReader implements ListingReader {
             return;
         }
         Mapper mapper = new Mapper(file);
+        InputStream raw = r.charset().equals(StandardCharsets.UTF_8) || r.charset().equals(StandardCharsets.US_ASCII)
+                ? r.undecoded() : null;
+        if (raw != null) {
+            try (r) {
+                new Utf8Lines(file, mapper, r.byteBase()).read(raw);
+            }
+            return;
+        }
         try (BufferedReader in = new BufferedReader(r, 1 << 16)) {
             String line;
             long n = 0;
@@ -67,26 +77,159 @@ final class JsonReader implements ListingReader {
                 if (n == 1 && line.startsWith("\uFEFF")) {
                     line = line.substring(1);
                 }
-                if (line.isBlank()) {
-                    continue;
+                if (!line.isBlank()) {
+                    parseLine(file, mapper, line, n);
                 }
-                JsonNode node;
-                try {
-                    node = TREE.readTree(line);
-                } catch (JsonProcessingException e) {
-                    file.problem("line " + n, "parse", "not valid JSON (" + e.getOriginalMessage()
-                            + "); the line was skipped. Each line must hold one complete JSON object");
-                    continue;
-                }
-                if (node == null || !node.isObject()) {
-                    file.problem("line " + n, "parse", "expected a JSON object on the line, found "
-                            + (node == null ? "nothing" : node.getNodeType().name().toLowerCase(java.util.Locale.ROOT)) + "; the line was skipped");
-                    continue;
-                }
-                mapper.emit((ObjectNode) node, "line " + n);
             }
         } finally {
             file.reportEncoding(r);
+        }
+    }
+
+    /** Parses one JSON Lines line (text) and hands its listing to the mapper, or records why not. */
+    private static void parseLine(SourceFile file, Mapper mapper, String line, long n) throws IOException {
+        JsonNode node;
+        try {
+            node = TREE.readTree(line);
+        } catch (JsonProcessingException e) {
+            badLine(file, n, e);
+            return;
+        }
+        emitLine(file, mapper, node, n);
+    }
+
+    private static void badLine(SourceFile file, long n, JsonProcessingException e) {
+        file.problem("line " + n, "parse", "not valid JSON (" + e.getOriginalMessage()
+                + "); the line was skipped. Each line must hold one complete JSON object");
+    }
+
+    private static void emitLine(SourceFile file, Mapper mapper, JsonNode node, long n) {
+        if (node == null || !node.isObject()) {
+            file.problem("line " + n, "parse", "expected a JSON object on the line, found "
+                    + (node == null ? "nothing" : node.getNodeType().name().toLowerCase(java.util.Locale.ROOT)) + "; the line was skipped");
+            return;
+        }
+        mapper.emit((ObjectNode) node, "line " + n);
+    }
+
+    /**
+     * JSON Lines in UTF-8 read as bytes: lines are cut at LF and parsed by Jackson straight from the
+     * buffer, so the text is never decoded to chars nor copied into a String per line. A line that
+     * does not parse and is not valid UTF-8 takes the text path (decoded with U+FFFD for each
+     * undecodable sequence, counted for the encoding problem), so the outcomes are the text path's
+     * (one difference: a surrogate encoded as three bytes, which Java's decoder rejects, is taken
+     * as the char it encodes, as Jackson reads it).
+     */
+    private static final class Utf8Lines {
+        private final SourceFile file;
+        private final Mapper mapper;
+        private final long byteBase;
+        private long malformed;
+        private long firstMalformedByte = -1;
+        private long firstMalformedLine = -1;
+
+        Utf8Lines(SourceFile file, Mapper mapper, long byteBase) {
+            this.file = file;
+            this.mapper = mapper;
+            this.byteBase = byteBase;
+        }
+
+        void read(InputStream in) throws IOException {
+            byte[] buf = new byte[1 << 16];
+            int len = 0; // bytes in buf
+            int from = 0; // start of the current line in buf
+            long fileOffset = byteBase; // file offset of buf[0]
+            long n = 0;
+            int scanned = 0;
+            while (true) {
+                int got = in.read(buf, len, buf.length - len);
+                boolean eof = got < 0;
+                if (!eof) {
+                    len += got;
+                }
+                int i = scanned;
+                for (; i < len; i++) {
+                    if (buf[i] == '\n') {
+                        line(buf, from, i, ++n, fileOffset + from);
+                        from = i + 1;
+                    }
+                }
+                if (eof) {
+                    if (from < len) {
+                        line(buf, from, len, ++n, fileOffset + from);
+                    }
+                    break;
+                }
+                // keep the unfinished line: move it to the front, or grow the buffer for a long line
+                if (from > 0) {
+                    System.arraycopy(buf, from, buf, 0, len - from);
+                    fileOffset += from;
+                    len -= from;
+                    from = 0;
+                } else if (len == buf.length) {
+                    buf = java.util.Arrays.copyOf(buf, buf.length * 2);
+                }
+                scanned = len;
+            }
+            file.reportEncoding(StandardCharsets.UTF_8, malformed, firstMalformedByte, firstMalformedLine);
+        }
+
+        private void line(byte[] b, int start, int end, long n, long offset) throws IOException {
+            if (end > start && b[end - 1] == '\r') {
+                end--;
+            }
+            if (n == 1 && end - start >= 3 && b[start] == (byte) 0xEF && b[start + 1] == (byte) 0xBB && b[start + 2] == (byte) 0xBF) {
+                start += 3; // a second byte-order mark, as the text path drops one
+                offset += 3;
+            }
+            if (blank(b, start, end)) {
+                return;
+            }
+            JsonNode node;
+            try {
+                node = TREE.readTree(b, start, end - start);
+            } catch (JsonProcessingException e) {
+                // a line with undecodable bytes goes the text way, so it reads as the text path reads it
+                DecodingReader d = new DecodingReader(new java.io.ByteArrayInputStream(b, start, end - start),
+                        StandardCharsets.UTF_8, offset);
+                StringBuilder text = new StringBuilder(end - start);
+                try (d) {
+                    char[] cb = new char[4096];
+                    int k;
+                    while ((k = d.read(cb, 0, cb.length)) >= 0) {
+                        text.append(cb, 0, k);
+                    }
+                }
+                if (d.malformed() > 0) {
+                    if (malformed == 0) {
+                        firstMalformedByte = d.firstMalformedByte();
+                        firstMalformedLine = n;
+                    }
+                    malformed += d.malformed();
+                }
+                String t = text.toString();
+                if (t.isBlank()) {
+                    return; // blank by Unicode's whitespace, as the text path skips it
+                }
+                if (d.malformed() == 0) {
+                    badLine(file, n, e);
+                } else {
+                    parseLine(file, mapper, t, n);
+                }
+                return;
+            }
+            emitLine(file, mapper, node, n);
+        }
+
+        /** Only what {@link String#isBlank()} counts as blank in ASCII (a line of other bytes is parsed). */
+        private static boolean blank(byte[] b, int start, int end) {
+            for (int i = start; i < end; i++) {
+                byte c = b[i];
+                if (c != ' ' && c != '\t' && c != '\r' && c != 0x0B && c != '\f' && (c < 0x1C || c > 0x1F)) {
+                    return false;
+                }
+            }
+            return true;
         }
     }
 

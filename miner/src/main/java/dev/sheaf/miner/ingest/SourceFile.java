@@ -141,9 +141,14 @@ final class SourceFile {
 
     /** Records an encoding problem when the reader met undecodable bytes. Call after reading. */
     void reportEncoding(DecodingReader r) {
-        if (r.malformed() > 0) {
-            problem("line " + r.firstMalformedLine(), "encoding", r.malformed() + " byte sequence(s) are not valid "
-                    + r.charset().name() + " (first at byte " + r.firstMalformedByte()
+        reportEncoding(r.charset(), r.malformed(), r.firstMalformedByte(), r.firstMalformedLine());
+    }
+
+    /** Records an encoding problem: {@code malformed} undecodable sequences, the first at that byte and line. */
+    void reportEncoding(Charset charset, long malformed, long firstByte, long firstLine) {
+        if (malformed > 0) {
+            problem("line " + firstLine, "encoding", malformed + " byte sequence(s) are not valid "
+                    + charset.name() + " (first at byte " + firstByte
                     + "); they were replaced by U+FFFD. Re-save the file as UTF-8");
         }
     }

@@ -154,6 +154,48 @@ class ReadersTest {
         assertEquals("isobutane", spec(r.byId("FH-000004"), "Fuel"), "specs as [{key, value}]");
     }
 
+    /**
+     * UTF-8 JSON Lines are parsed from bytes, other encodings from decoded text: the same lines
+     * must give the same listings and the same problems either way, including a line longer than the
+     * read buffer, CRLF ends, blank lines of Unicode spaces, a broken line and an undecodable byte.
+     */
+    @Test
+    void jsonLinesReadTheSameFromBytesAsFromText(@TempDir Path dir) throws IOException {
+        StringBuilder long1 = new StringBuilder();
+        for (int i = 0; i < 12000; i++) { // 84 kB: longer than the 64 kB read buffer
+            long1.append("Wärme ");
+        }
+        String[] lines = {
+            "{\"id\":\"A1\",\"title\":\"Fjell Tent – 2P\",\"specs\":{\"Weight\":\"1.2 kg\"}}",
+            "\u2003\u2002 ",
+            "{\"id\":\"A2\",\"title\":\"Long\",\"description\":\"" + long1 + "\"}",
+            "{\"id\":\"A3\",\"title\": broken",
+            "",
+            "[1, 2]",
+            "{\"id\":\"A4\",\"title\":\"Ørsted Mug 🏕\",\"bullets\":[\"350 ml\",\"Ti\"]}",
+        };
+        String text = String.join("\r\n", lines) + "\n";
+        Path utf8 = Files.writeString(dir.resolve("utf8.jsonl"), text, java.nio.charset.StandardCharsets.UTF_8);
+        java.io.ByteArrayOutputStream b16 = new java.io.ByteArrayOutputStream();
+        b16.write(0xFF);
+        b16.write(0xFE);
+        b16.write(text.getBytes(java.nio.charset.StandardCharsets.UTF_16LE));
+        Path utf16 = Files.write(dir.resolve("utf16.jsonl"), b16.toByteArray());
+        Fixtures.Result bytes = read(utf8);
+        Fixtures.Result chars = read(utf16);
+        assertEquals(List.of("A1", "A2", "A4"), bytes.ids().stream().sorted().toList());
+        assertEquals(chars.ids().stream().sorted().toList(), bytes.ids().stream().sorted().toList());
+        for (String id : List.of("A1", "A2", "A4")) {
+            assertEquals(chars.byId(id).fields(), bytes.byId(id).fields(), id);
+            assertEquals(chars.byId(id).locator(), bytes.byId(id).locator(), id);
+        }
+        assertEquals(List.of("line 4", "line 6"), bytes.problems().stream().map(Problem::position).sorted().toList());
+        assertEquals(chars.problems().stream().map(p -> p.position() + " " + p.kind()).sorted().toList(),
+                bytes.problems().stream().map(p -> p.position() + " " + p.kind()).sorted().toList());
+        assertEquals("line 7", bytes.byId("A4").locator());
+        assertEquals(12000 * 6 - 1, texts(bytes.byId("A2"), FieldKind.DESCRIPTION).get(0).length());
+    }
+
     @Test
     void jsonMappingReachesNestedMembersByDottedPath(@TempDir Path dir) throws IOException {
         Path f = dir.resolve("nested.jsonl");
