@@ -1,6 +1,8 @@
 package dev.sheaf.miner.bench;
 
+import dev.sheaf.miner.ingest.Ingest;
 import dev.sheaf.miner.ingest.Listing;
+import dev.sheaf.miner.ingest.SourceSpec;
 import dev.sheaf.miner.mine.Harvest;
 import dev.sheaf.miner.mine.HarvestFiles;
 import dev.sheaf.miner.mine.HarvestOptions;
@@ -18,8 +20,9 @@ import java.util.concurrent.atomic.AtomicLong;
 /**
  * Benchmark driver (test scope, used by bench/mine-benchmark.sh until ingest is merged):
  * {@code mine FILE.jsonl OUTDIR [threads]} — the whole harvest, written like sheaf mine writes it;
- * {@code analysis-only FILE.jsonl [threads]} — the same reading and the same Lucene analysis over
- * the same threads, with no counting: the floor that mining is measured against.
+ * {@code analysis-only FILE.jsonl [threads]} — the same reading (the ingest stage, as sheaf mine
+ * reads) and the same Lucene analysis over the same threads, with no counting: the floor that
+ * mining is measured against.
  */
 public final class BenchMain {
     private BenchMain() {
@@ -106,7 +109,8 @@ public final class BenchMain {
             workers.add(t);
         }
         List<Listing>[] batch = new List[] {new ArrayList<>(256)};
-        JsonlListings.read(file, file.getFileName().toString(), l -> {
+        // the reading of sheaf mine itself: the ingest stage's readers, one reading thread per file
+        Ingest.builder().source(SourceSpec.of(file)).threads(1).build().run(l -> {
             batch[0].add(l);
             if (batch[0].size() == 256) {
                 try {
@@ -116,7 +120,7 @@ public final class BenchMain {
                 }
                 batch[0] = new ArrayList<>(256);
             }
-        }, System.err::println);
+        });
         queue.put(batch[0]);
         for (int w = 0; w < threads; w++) {
             queue.put(poison);
