@@ -19,8 +19,8 @@ final class DecodingReader extends Reader {
     private final InputStream in;
     private final Charset charset;
     private final CharsetDecoder decoder;
-    private final ByteBuffer bytes = ByteBuffer.allocate(1 << 16);
-    private final CharBuffer chars = CharBuffer.allocate(1 << 15);
+    private final ByteBuffer bytes;
+    private final CharBuffer chars;
     private final long byteBase;
     private long consumed;
     private boolean eof;
@@ -36,6 +36,17 @@ final class DecodingReader extends Reader {
      * @param byteBase how many bytes precede the stream's start in the file (the BOM length), for positions
      */
     DecodingReader(InputStream in, Charset charset, long byteBase) {
+        this(in, charset, byteBase, 1 << 16);
+    }
+
+    /**
+     * @param sizeHint how many bytes the stream holds, if known: buffers are sized to it (between 4
+     *                 and 64 kB), so a folder of small pages does not allocate 128 kB for each page
+     */
+    DecodingReader(InputStream in, Charset charset, long byteBase, long sizeHint) {
+        int size = (int) Math.max(1 << 12, Math.min(1 << 16, sizeHint));
+        this.bytes = ByteBuffer.allocate(size);
+        this.chars = CharBuffer.allocate(Math.max(1 << 12, size / 2));
         this.in = in;
         this.charset = charset;
         this.byteBase = byteBase;

@@ -191,7 +191,7 @@ final class JsonReader implements ListingReader {
             } catch (JsonProcessingException e) {
                 // a line with undecodable bytes goes the text way, so it reads as the text path reads it
                 DecodingReader d = new DecodingReader(new java.io.ByteArrayInputStream(b, start, end - start),
-                        StandardCharsets.UTF_8, offset);
+                        StandardCharsets.UTF_8, offset, end - start);
                 StringBuilder text = new StringBuilder(end - start);
                 try (d) {
                     char[] cb = new char[4096];

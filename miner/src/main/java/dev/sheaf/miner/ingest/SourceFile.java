@@ -115,7 +115,8 @@ final class SourceFile {
      * @param declared finds an encoding the file declares in its first bytes (HTML meta), or null
      */
     DecodingReader openText(Function<byte[], Charset> declared) throws IOException {
-        BufferedInputStream in = new BufferedInputStream(open(), Decoding.SNIFF_BYTES);
+        // the buffer holds the sniffed head (it grows to the mark limit if the size was wrong)
+        BufferedInputStream in = new BufferedInputStream(open(), (int) Math.min(Decoding.SNIFF_BYTES, Math.max(1 << 13, size + 1)));
         boolean ok = false;
         try {
             in.mark(Decoding.SNIFF_BYTES);
@@ -131,7 +132,7 @@ final class SourceFile {
             Decoding.Guess g = Decoding.guess(head, head.length, whole, decl);
             in.skipNBytes(g.bomLength());
             ok = true;
-            return new DecodingReader(in, g.charset(), g.bomLength());
+            return new DecodingReader(in, g.charset(), g.bomLength(), size);
         } finally {
             if (!ok) {
                 in.close();
