@@ -107,8 +107,11 @@ for n in "${SIZES[@]}"; do
   else
     measure read "$n" "$bytes" "read every byte (cat)" sh -c "cat '$f' > /dev/null"
   fi
-  # 2. analysis only: the same reading and Lucene analysis on the same threads, no counting
+  # 2. the Java floors on the same reading thread and workers: reading only, Lucene's tokenizer
+  #    alone, and the profile's whole analysis chain (the miner's first pass without counting)
   if [ "$FORMAT" = jsonl ]; then
+    measure readonly "$n" "$bytes" "read+parse only (Java)" java "${LOPTS[@]}" "$HEAP" ${JOPTS[@]+"${JOPTS[@]}"} -cp "$CP" dev.sheaf.miner.bench.BenchMain read-only "$f"
+    measure tokenizer "$n" "$bytes" "tokenizer only (Java)" java "${LOPTS[@]}" "$HEAP" ${JOPTS[@]+"${JOPTS[@]}"} -cp "$CP" dev.sheaf.miner.bench.BenchMain tokenizer-only "$f"
     measure analysis "$n" "$bytes" "analysis only (Java)" java "${LOPTS[@]}" "$HEAP" ${JOPTS[@]+"${JOPTS[@]}"} -cp "$CP" dev.sheaf.miner.bench.BenchMain analysis-only "$f"
   fi
   # 3. the whole job
@@ -152,6 +155,14 @@ verdict() { if awk "BEGIN { exit !($1) }"; then echo "  PASS  $2"; else echo "  
 if [ -n "${WALL[sheaf:100000]:-}" ]; then
   [ -n "${WALL[nltk:100000]:-}" ] && verdict "${WALL[nltk:100000]} >= 10 * ${WALL[sheaf:100000]}" "100k: sheaf ${WALL[sheaf:100000]} s vs NLTK ${WALL[nltk:100000]} s"
   [ -n "${WALL[sklearn:100000]:-}" ] && verdict "${WALL[sklearn:100000]} >= 5 * ${WALL[sheaf:100000]}" "100k: sheaf ${WALL[sheaf:100000]} s vs CountVectorizer ${WALL[sklearn:100000]} s"
+  # how much of the NLTK budget the floors alone use (JVM start included in each)
+  if [ -n "${WALL[nltk:100000]:-}" ]; then
+    for fl in readonly tokenizer analysis; do
+      v="${WALL[$fl:100000]:-}"
+      [ -n "$v" ] && awk -v f="$fl" -v v="$v" -v p="${WALL[nltk:100000]}" \
+        'BEGIN { printf "        100k floor %-10s %6.2f s = %5.1f%% of the 10x-NLTK budget (%.2f s)\n", f, v, 100 * v / (p / 10), p / 10 }'
+    done
+  fi
 fi
 if [ -n "${WALL[sheaf:1000000]:-}" ]; then
   verdict "${WALL[sheaf:1000000]} <= 45" "1M: sheaf ${WALL[sheaf:1000000]} s wall"

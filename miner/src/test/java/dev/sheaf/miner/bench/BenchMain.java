@@ -65,13 +65,32 @@ public final class BenchMain {
                     (cpu() - cpuStart[0]) / 1e9);
             System.err.printf("mine: %d listings, %d tokens, %d candidates in %.2f s wall, %.2f s cpu%n", harvest.corpus().listings(),
                     harvest.corpus().tokens(), harvest.candidates().size(), (System.nanoTime() - t0) / 1e9, cpu() / 1e9);
-        } else if (mode.equals("analysis-only")) {
+        } else if (mode.equals("analysis-only") || mode.equals("tokenizer-only") || mode.equals("read-only")) {
             int threads = args.length > 2 ? Integer.parseInt(args[2]) : Runtime.getRuntime().availableProcessors();
-            long tokens = analysisOnly(file, threads);
-            System.err.printf("analysis-only: %d tokens in %.2f s wall, %.2f s cpu%n", tokens, (System.nanoTime() - t0) / 1e9, cpu() / 1e9);
+            long tokens = floor(file, threads, mode);
+            System.err.printf("%s: %d tokens in %.2f s wall, %.2f s cpu%n", mode, tokens, (System.nanoTime() - t0) / 1e9, cpu() / 1e9);
         } else {
-            throw new IllegalArgumentException("mode must be mine or analysis-only");
+            throw new IllegalArgumentException("mode must be mine, analysis-only, tokenizer-only or read-only");
         }
+    }
+
+    private static long tokens(org.apache.lucene.analysis.Tokenizer tok, String text) {
+        if (text == null || text.isEmpty()) {
+            return 0;
+        }
+        long n = 0;
+        try {
+            tok.setReader(new java.io.StringReader(text));
+            tok.reset();
+            while (tok.incrementToken()) {
+                n++;
+            }
+            tok.end();
+            tok.close();
+        } catch (java.io.IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
+        return n;
     }
 
     /** CPU time of the whole process so far, in ns (all threads, JIT and GC included). */
@@ -80,7 +99,13 @@ public final class BenchMain {
                 .getProcessCpuTime();
     }
 
-    private static long analysisOnly(Path file, int threads) throws Exception {
+    /**
+     * The floors, on the same reading thread and workers: {@code read-only} hands each listing to a
+     * worker that only counts its characters (the ingest stage alone); {@code tokenizer-only} runs
+     * Lucene's tokenizer alone over every text (no filters, no term ids); {@code analysis-only} the
+     * profile's whole chain through the segmenter, as the miner's first pass does, with no counting.
+     */
+    private static long floor(Path file, int threads, String mode) throws Exception {
         Analysis analysis = Analysis.of(AnalysisProfile.defaults());
         ArrayBlockingQueue<List<Listing>> queue = new ArrayBlockingQueue<>(threads * 4);
         List<Listing> poison = new ArrayList<>();
@@ -89,6 +114,7 @@ public final class BenchMain {
         for (int w = 0; w < threads; w++) {
             Thread t = new Thread(() -> {
                 Segmenter seg = analysis.newSegmenter();
+                org.apache.lucene.analysis.standard.StandardTokenizer tok = new org.apache.lucene.analysis.standard.StandardTokenizer();
                 long[] n = {0};
                 try {
                     while (true) {
@@ -97,6 +123,18 @@ public final class BenchMain {
                             break;
                         }
                         for (Listing l : b) {
+                            if (mode.equals("read-only")) {
+                                for (dev.sheaf.miner.ingest.Field f : l.fields()) {
+                                    n[0] += f.text().length() + (f.key() == null ? 0 : f.key().length());
+                                }
+                                continue;
+                            }
+                            if (mode.equals("tokenizer-only")) {
+                                for (dev.sheaf.miner.ingest.Field f : l.fields()) {
+                                    n[0] += tokens(tok, f.key()) + tokens(tok, f.text());
+                                }
+                                continue;
+                            }
                             seg.analyze(l, (field, part, ids, starts, ends, length) -> n[0] += length);
                         }
                     }
