@@ -38,8 +38,13 @@ public final class AtomicFiles {
     private static final String SPILL = ".spill";
     /** The names {@link #newTempFile} gives: a dot, up to 16 hex digits, a dot, the target's name, .tmp or .spill. */
     private static final java.util.regex.Pattern STALE_NAME = java.util.regex.Pattern.compile("\\.[0-9a-f]{1,16}\\..+\\.(tmp|spill)");
-    /** When this process started (the class's loading if the system cannot say); older temporaries are not this run's. */
-    private static final java.time.Instant RUN_START = runStart();
+    /**
+     * When this run began writing (this class's loading: every temporary of this process is made after
+     * it). Not the process's start time, which the JDK derives from the boot time and which was seen
+     * to come out early here: a run started right after a killed one then kept the killed one's last
+     * temporaries.
+     */
+    private static final java.time.Instant RUN_START = java.time.Instant.now();
     private static final java.util.Set<Path> SWEPT = java.util.concurrent.ConcurrentHashMap.newKeySet();
 
     private AtomicFiles() {
@@ -224,13 +229,6 @@ public final class AtomicFiles {
      * by their owner only, this one gets the ordinary permissions (the process umask), because our
      * outputs are reports and tables meant to be shared.
      */
-    /** The process's start (whole seconds of boot time in it on Linux), or now if earlier or unknown. */
-    private static java.time.Instant runStart() {
-        java.time.Instant now = java.time.Instant.now();
-        java.time.Instant start = ProcessHandle.current().info().startInstant().orElse(now);
-        return start.isBefore(now) ? start : now;
-    }
-
     private static Path newTempFile(Path dir, String suffix) throws IOException {
         sweepStale(dir);
         java.util.concurrent.ThreadLocalRandom rnd = java.util.concurrent.ThreadLocalRandom.current();

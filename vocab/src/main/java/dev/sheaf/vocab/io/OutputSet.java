@@ -149,6 +149,7 @@ public final class OutputSet implements AutoCloseable {
             Set<Path> dirs = new LinkedHashSet<>();
             List<Map.Entry<Path, Staged>> entries = new ArrayList<>(staged.entrySet());
             for (Map.Entry<Path, Staged> e : entries) {
+                Files.createDirectories(e.getKey().getParent()); // a folder first written by this set
                 AtomicFiles.replace(e.getValue().file, e.getKey(), e.getValue().keepBackup);
                 staged.remove(e.getKey());
                 dirs.add(e.getKey().getParent());
