@@ -124,7 +124,7 @@ class KillDuringWriteTest {
                 }
             }
         }
-        long leftByKills = files(out).keySet().stream().filter(KillDuringWriteTest::isTemporary).count();
+        long leftByLastKill = files(out).keySet().stream().filter(KillDuringWriteTest::isTemporary).count();
         // one more run, not killed: it sweeps what the killed ones left and leaves nothing of its own
         Process last = start(harvest, ws, out, true);
         String said = new String(last.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
@@ -139,8 +139,8 @@ class KillDuringWriteTest {
         }
         assertEquals(ref.get(0).keySet(), after.keySet());
         System.out.printf("kill-during-write: %d kills, %d after the second round began, %d files checked, %d files corrupted, "
-                + "%d temporary files left by the kills, %d after the next run%n", kills, midRound, checked, corrupted,
-                leftByKills, temps.size());
+                + "%d temporary files after the last kill (each child sweeps the ones before), %d after the next run%n", kills, midRound, checked, corrupted,
+                leftByLastKill, temps.size());
         assertEquals(List.of(), bad);
         assertTrue(midRound > 0, "no kill landed after the child had started writing");
         assertEquals(List.of(), temps, "the next run removes the temporaries the killed ones left");
