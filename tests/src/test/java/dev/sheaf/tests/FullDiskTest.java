@@ -12,6 +12,8 @@ import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.attribute.PosixFilePermissions;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
 import java.util.stream.Stream;
@@ -21,6 +23,9 @@ import org.junit.jupiter.api.io.TempDir;
 /**
  * A full disk and a read-only output folder: {@code sheaf mine} ends with exit code 1 and a message
  * that names the folder and the cause, and the outputs of the earlier run are intact, byte for byte.
+ * The same holds for {@code sheaf label} and {@code sheaf audit} when the disk fills half-way through
+ * their outputs: with a limit between the sizes of the new run's files, the smaller ones would have
+ * been replaced, one by one, if each file were committed alone; as one output set, none is.
  * A full disk is simulated without privileges by a file-size limit on the child ({@code ulimit -f}
  * in bash: the JVM ignores SIGXFSZ, so the write fails with EFBIG, "File too large", as ENOSPC would).
  */
@@ -46,6 +51,92 @@ class FullDiskTest {
         assertEquals(1, p.waitFor(), said);
         assertTrue(said.contains("cannot write the harvest to " + out) && said.contains("File too large"), said);
         assertSame(before, files(out));
+    }
+
+    @Test
+    void aDiskFullHalfWayThroughTheHarvestLeavesEveryFileTheOldVersion() throws Exception {
+        Path out = dir.resolve("out");
+        assertEquals(0, mineHere(out, "40"));
+        String[] next = {"mine", HTML.toString(), "--out", "OUT", "--no-progress", "--threads", "2", "--limit", "2000"};
+        assertEachFileOldAfterAFullDisk(out, next, "cannot write the harvest to " + out);
+    }
+
+    @Test
+    void aDiskFullHalfWayThroughTheLabelExportsLeavesEveryFileTheOldVersion() throws Exception {
+        Path ws = KillDuringWriteTest.smallWorkspace(dir.resolve("ws"));
+        Path out = dir.resolve("labels");
+        String vocab = ws.resolve("vocab.json").toString();
+        assertEquals(0, run("label", ws.resolve("catalog/stoves").toString(), "--vocab", vocab, "--out", out.toString(),
+                "--no-progress", "--threads", "1"));
+        // a small catalog: its spill file and assignments fit under the limit, the summary written last does not
+        String[] next = {"label", ws.resolve("catalog/tents").toString(), "--vocab", vocab, "--out", "OUT", "--no-progress",
+                "--threads", "1", "--split", "80/10/10"};
+        assertEachFileOldAfterAFullDisk(out, next, "cannot write the results to " + out);
+    }
+
+    @Test
+    void aDiskFullHalfWayThroughTheAuditLeavesEveryFileTheOldVersion() throws Exception {
+        Path ws = KillDuringWriteTest.smallWorkspace(dir.resolve("ws"));
+        Path out = dir.resolve("audit");
+        String json = Files.readString(ws.resolve("workspace.json"));
+        Files.writeString(ws.resolve("workspace.json"), json.replace("\"path\": \"catalog\"", "\"path\": \"catalog/tents\""));
+        assertEquals(0, run("audit", ws.toString(), "--out", out.toString()));
+        Files.writeString(ws.resolve("workspace.json"), json);
+        assertEachFileOldAfterAFullDisk(out, new String[] {"audit", ws.toString(), "--out", "OUT"}, "cannot read or write");
+    }
+
+    /**
+     * Runs {@code args} (with OUT for the output folder) once into a scratch folder to learn the new
+     * files' sizes, then again over {@code out} in a child under a file-size limit between the two
+     * largest: the run must fail, saying {@code message}, and leave {@code out} byte for byte as it was.
+     */
+    private void assertEachFileOldAfterAFullDisk(Path out, String[] args, String message) throws Exception {
+        Map<String, byte[]> before = files(out);
+        Path scratch = dir.resolve("scratch-" + out.getFileName());
+        assertTrue(List.of(0, 3).contains(run(withOut(args, scratch))), "the run succeeds without a limit");
+        List<Long> sizes = new ArrayList<>();
+        for (byte[] b : files(scratch).values()) {
+            sizes.add((long) b.length);
+        }
+        sizes.sort(java.util.Comparator.reverseOrder());
+        long largest = sizes.get(0);
+        long second = sizes.get(1);
+        long blocks = (largest + second) / 2 / 1024; // ulimit -f counts blocks of 1,024 bytes
+        assertTrue(second < blocks * 1024 && blocks * 1024 < largest,
+                "the new files' sizes leave room for a limit between the two largest: " + sizes);
+        long replaceable = sizes.stream().filter(n -> n > 0 && n < blocks * 1024).count();
+        assertTrue(replaceable >= 2, "files one by one would have replaced several of the old ones: " + sizes);
+
+        String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
+        String cp = System.getProperty("surefire.test.class.path", System.getProperty("java.class.path"));
+        List<String> cmd = new ArrayList<>(List.of("bash", "-c", "ulimit -f " + blocks + "; exec \"$@\"", "bash", java, "-Xmx512m",
+                "-Djava.io.tmpdir=" + Files.createDirectories(dir.resolve("tmp")), "-cp", cp, Main.class.getName()));
+        cmd.addAll(List.of(withOut(args, out)));
+        Process p = new ProcessBuilder(cmd).redirectErrorStream(true).start();
+        String said = new String(p.getInputStream().readAllBytes());
+        int code = p.waitFor();
+        assertTrue(code == 1 || code == 3, "exit code " + code + ": " + said);
+        assertTrue(said.contains(message) && said.contains("File too large"), said);
+        assertSame(before, files(out));
+    }
+
+    private static String[] withOut(String[] args, Path out) {
+        String[] a = args.clone();
+        for (int i = 0; i < a.length; i++) {
+            if (a[i].equals("OUT")) {
+                a[i] = out.toString();
+            }
+        }
+        return a;
+    }
+
+    private static int run(String... args) {
+        StringWriter e = new StringWriter();
+        int code = Main.commandLine(new PrintWriter(new StringWriter()), new PrintWriter(e)).execute(args);
+        if (code != 0 && code != 3) {
+            System.err.println(e);
+        }
+        return code;
     }
 
     @Test

@@ -149,6 +149,20 @@ final class HostileCorpus {
         deep.append("<div>".repeat(100_000)).append("<p>Material: aluminium</p>").append("</div>".repeat(100_000));
         deep.append("</body></html>");
         put("hostile/html/nested-100000.html", utf8(deep.toString()), "HTML with 100,000 nested div elements", Set.of(), 1);
+        StringBuilder big = new StringBuilder("<html><head><title>Endless Page Lantern</title></head><body>\n<h1>Endless Page Lantern</h1>\n");
+        big.append("<p>Material: steel</p>\n");
+        String para = "<p>" + "lantern text that never ends, ".repeat(33) + "</p>\n";
+        big.append(para.repeat(6_000)).append("</body></html>\n");
+        put("hostile/html/text-6m-characters.html", utf8(big.toString()),
+                "an HTML page with 6 million characters of text (the limit for one listing is 5 million)", Set.of("too-large"), 1);
+        StringBuilder dl = new StringBuilder("<html><head><title>Nested List Lantern</title></head><body>\n");
+        for (int i = 0; i < 2_000; i++) {
+            dl.append("<dl><dt>Key ").append(i).append("</dt><dd>value ").append(i).append(" of the nested list\n");
+        }
+        dl.append("</dd></dl>".repeat(2_000)).append("</body></html>\n");
+        put("hostile/html/nested-definitions.html", utf8(dl.toString()),
+                "HTML with 2,000 nested definition lists (each value holds all deeper ones: the text grows with the square of the page)",
+                Set.of("too-large"), 1);
         putLongLine("hostile/text/single-line-50mb.txt");
         byte[] utf8 = utf8("Größe Parka\n\nMaterial: Baumwolle für Außen\n");
         byte[] broken = Arrays.copyOf(utf8, utf8.length + 1);

@@ -1,6 +1,7 @@
 package dev.sheaf.tests;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.sheaf.miner.cli.Main;
@@ -27,10 +28,13 @@ import org.junit.jupiter.api.io.TempDir;
 
 /**
  * Kills a child JVM ({@link WriteLoopMain}) with SIGKILL at random moments while it rewrites the
- * harvest files, problems.csv and an HTML report in one folder, two versions in turn: every output
- * file must then be absent (never written yet), or byte for byte one complete version. The
- * vocabulary store's own kill test is {@code vocab/…/CrashDuringSaveTest}. A process kill leaves the
- * page cache intact, so this tests atomicity, not power loss.
+ * harvest files, problems.csv and an HTML report, the label exports and a whole audit (labels,
+ * coverage, agreement, consistency, the report and its tables) in one folder, two versions in turn:
+ * every output file must then be absent (never written yet), or byte for byte one complete version.
+ * Temporaries a kill leaves are removed by the next run: after the last kill, one more child writes
+ * one round and none is left. The vocabulary store's own kill test is
+ * {@code vocab/…/CrashDuringSaveTest}. A process kill leaves the page cache intact, so this tests
+ * atomicity, not power loss.
  */
 class KillDuringWriteTest {
     @TempDir
@@ -51,21 +55,33 @@ class KillDuringWriteTest {
         Path[] harvest = {dir.resolve("a/harvest.json"), dir.resolve("b/harvest.json")};
         mine(dir.resolve("a"), "40");
         mine(dir.resolve("b"), "400");
-        // the reference bytes: each version written once, by the same code, in this process
+        Path ws = smallWorkspace(dir.resolve("ws"));
+        // the reference bytes: each version written once, by the same code, in this process, in the folder
+        // the child writes to (the label summary names its files by path)
+        Path out = dir.resolve("out");
         List<Map<String, byte[]>> ref = new ArrayList<>();
         for (int v = 0; v < 2; v++) {
-            Path r = Files.createDirectories(dir.resolve("ref" + v));
-            WriteLoopMain.outputs(harvest[v], v).write(r);
-            ref.add(files(r));
+            WriteLoopMain.outputs(harvest[v], v, ws).write(out);
+            ref.add(files(out));
+            deleteTree(out);
         }
         assertEquals(ref.get(0).keySet(), ref.get(1).keySet());
-        Path out = Files.createDirectories(dir.resolve("out"));
+        assertTrue(ref.get(0).keySet().containsAll(List.of("labels/labels.csv", "labels/assignments.jsonl", "audit/report.html",
+                "audit/labels/labels.csv", "audit/coverage/coverage.csv", "audit/consistency/consistency.json",
+                "audit/agreement/agreement.json")), ref.get(0).keySet().toString());
+        for (String f : List.of("harvest.json", "problems.csv", "report.html", "labels/labels.csv", "labels/assignments.jsonl",
+                "audit/report.html", "audit/labels/labels.csv", "audit/coverage/coverage.csv")) {
+            assertFalse(Arrays.equals(ref.get(0).get(f), ref.get(1).get(f)), f + " must differ between the versions ("
+                    + ref.get(0).get(f).length + " bytes)");
+        }
+        Files.createDirectories(out);
         Random rnd = new Random(seed);
         int midRound = 0;
         int corrupted = 0;
+        long checked = 0;
         List<String> bad = new ArrayList<>();
         for (int k = 0; k < kills; k++) {
-            Process p = start(harvest, out);
+            Process p = start(harvest, ws, out, false);
             AtomicInteger done = new AtomicInteger(-1);
             AtomicInteger ready = new AtomicInteger();
             Thread reader = new Thread(() -> {
@@ -96,9 +112,10 @@ class KillDuringWriteTest {
                 midRound++;
             }
             for (Map.Entry<String, byte[]> e : files(out).entrySet()) {
-                if (e.getKey().endsWith(".tmp")) {
+                if (isTemporary(e.getKey())) {
                     continue; // a write in progress when killed: hidden, never taken for an output
                 }
+                checked++;
                 byte[] want0 = ref.get(0).get(e.getKey());
                 byte[] want1 = ref.get(1).get(e.getKey());
                 if (want0 == null || !Arrays.equals(e.getValue(), want0) && !Arrays.equals(e.getValue(), want1)) {
@@ -107,14 +124,62 @@ class KillDuringWriteTest {
                 }
             }
         }
-        long temps;
-        try (Stream<Path> s = Files.list(out)) {
-            temps = s.filter(f -> f.getFileName().toString().endsWith(".tmp")).count();
+        long leftByLastKill = files(out).keySet().stream().filter(KillDuringWriteTest::isTemporary).count();
+        // one more run, not killed: it sweeps what the killed ones left and leaves nothing of its own
+        Process last = start(harvest, ws, out, true);
+        String said = new String(last.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
+        assertEquals(0, last.waitFor(), said);
+        List<String> temps = new ArrayList<>();
+        try (Stream<Path> s = Files.walk(out)) {
+            s.filter(f -> isTemporary(out.relativize(f).toString())).forEach(f -> temps.add(out.relativize(f).toString()));
         }
-        System.out.printf("kill-during-write: %d kills, %d after the second round began, %d files corrupted, %d temporary files left%n",
-                kills, midRound, corrupted, temps);
+        Map<String, byte[]> after = files(out);
+        for (Map.Entry<String, byte[]> e : after.entrySet()) {
+            assertTrue(Arrays.equals(e.getValue(), ref.get(0).get(e.getKey())), "the last run wrote version 0 of " + e.getKey());
+        }
+        assertEquals(ref.get(0).keySet(), after.keySet());
+        System.out.printf("kill-during-write: %d kills, %d after the second round began, %d files checked, %d files corrupted, "
+                + "%d temporary files after the last kill (each child sweeps the ones before), %d after the next run%n", kills, midRound, checked, corrupted,
+                leftByLastKill, temps.size());
         assertEquals(List.of(), bad);
         assertTrue(midRound > 0, "no kill landed after the child had started writing");
+        assertEquals(List.of(), temps, "the next run removes the temporaries the killed ones left");
+    }
+
+    /** A hidden temporary (ours: {@code .<hex>.<name>.tmp} or {@code .spill}), or a file in a staging folder. */
+    static boolean isTemporary(String relative) {
+        for (String part : relative.split("/")) {
+            if (part.startsWith(".") && (part.endsWith(".tmp") || part.endsWith(".spill"))) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /**
+     * A workspace of the demo's text listings, its vocabulary, and the first rows of its feedback
+     * and judgments (enough for every stage of the audit, small enough for a round in about a second).
+     */
+    static Path smallWorkspace(Path ws) throws IOException {
+        Path demo = Path.of("..", "sample-listings");
+        Path text = demo.resolve("catalog/text");
+        try (Stream<Path> s = Files.walk(text)) {
+            for (Path f : s.filter(Files::isRegularFile).sorted().toList()) {
+                Path to = ws.resolve("catalog").resolve(text.relativize(f).toString());
+                Files.createDirectories(to.getParent());
+                Files.copy(f, to);
+            }
+        }
+        Files.copy(demo.resolve("fernhollow.vocab.json"), ws.resolve("vocab.json"));
+        Files.write(ws.resolve("feedback.csv"), Files.readAllLines(demo.resolve("feedback.csv")).subList(0, 301));
+        Files.write(ws.resolve("judgments.csv"), Files.readAllLines(demo.resolve("judgments.csv")).subList(0, 3001));
+        Files.writeString(ws.resolve("workspace.json"), """
+                {"format": "sheaf-workspace", "formatVersion": 1, "name": "Kill test",
+                 "sources": [{"path": "catalog", "include": ["**/*"], "exclude": ["**/README*"]}],
+                 "profile": "default", "vocabulary": "vocab.json", "feedback": "feedback.csv",
+                 "judgments": "judgments.csv", "output": "out"}
+                """);
+        return ws;
     }
 
     private static void mine(Path out, String limit) {
@@ -126,13 +191,25 @@ class KillDuringWriteTest {
         assertEquals(0, code, e.toString());
     }
 
-    private static Process start(Path[] harvest, Path out) throws IOException {
+    private static Process start(Path[] harvest, Path ws, Path out, boolean once) throws IOException {
         String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
         String cp = System.getProperty("surefire.test.class.path", System.getProperty("java.class.path"));
-        ProcessBuilder pb = new ProcessBuilder(List.of(java, "-Xmx256m", "-XX:TieredStopAtLevel=1", "-XX:+UseSerialGC", "-cp", cp,
-                WriteLoopMain.class.getName(), harvest[0].toString(), harvest[1].toString(), out.toString()));
+        List<String> cmd = new ArrayList<>(List.of(java, "-Xmx256m", "-XX:TieredStopAtLevel=1", "-XX:+UseSerialGC", "-cp", cp,
+                WriteLoopMain.class.getName(), harvest[0].toString(), harvest[1].toString(), ws.toString(), out.toString()));
+        if (once) {
+            cmd.add("--once");
+        }
+        ProcessBuilder pb = new ProcessBuilder(cmd);
         pb.redirectError(ProcessBuilder.Redirect.INHERIT);
         return pb.start();
+    }
+
+    private static void deleteTree(Path root) throws IOException {
+        try (Stream<Path> s = Files.walk(root)) {
+            for (Path p : s.sorted(java.util.Comparator.reverseOrder()).toList()) {
+                Files.delete(p);
+            }
+        }
     }
 
     private static Map<String, byte[]> files(Path root) throws IOException {

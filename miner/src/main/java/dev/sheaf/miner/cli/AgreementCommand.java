@@ -15,6 +15,7 @@ import dev.sheaf.miner.measure.JudgmentColumns;
 import dev.sheaf.miner.measure.Judgments;
 import dev.sheaf.miner.measure.JudgmentsCsv;
 import dev.sheaf.miner.measure.Pseudonyms;
+import dev.sheaf.vocab.io.OutputSet;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Files;
@@ -189,7 +190,8 @@ final class AgreementCommand implements Callable<Integer> {
         AgreementReport report = AgreementAnalysis.run(judgments, options.toBuilder().pseudonyms(pseudonyms).build());
         printTable(report, stdout);
         try {
-            AgreementFiles.write(report, outDir);
+            Path dest = outDir;
+            OutputSet.writeAll(dest, set -> AgreementFiles.write(report, dest));
         } catch (IOException e) {
             err.println("sheaf agreement: cannot write the results to " + outDir + ": " + describe(e));
             return ExitCodes.FAILURE;

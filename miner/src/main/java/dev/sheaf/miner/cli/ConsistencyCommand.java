@@ -12,6 +12,7 @@ import dev.sheaf.miner.measure.OverlapPair;
 import dev.sheaf.miner.text.Analysis;
 import dev.sheaf.miner.text.AnalysisProfile;
 import dev.sheaf.vocab.Vocabulary;
+import dev.sheaf.vocab.io.OutputSet;
 import dev.sheaf.vocab.store.VocabularyStore;
 import dev.sheaf.miner.measure.AgreementAnalysis;
 import dev.sheaf.miner.measure.AgreementOptions;
@@ -289,7 +290,7 @@ final class ConsistencyCommand implements Callable<Integer> {
                 .agreement(agreement).vocabulary(vocabulary).fill(fill).overlaps(overlaps).build(), flagThresholds);
         printTable(report, flags, stdout);
         try {
-            ConsistencyFiles.write(report, flags, outDir);
+            OutputSet.writeAll(outDir, set -> ConsistencyFiles.write(report, flags, outDir));
         } catch (IOException e) {
             err.println("sheaf consistency: cannot write the results to " + outDir + ": " + describe(e));
             return ExitCodes.FAILURE;

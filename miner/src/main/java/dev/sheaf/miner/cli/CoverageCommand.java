@@ -13,6 +13,7 @@ import dev.sheaf.miner.measure.CoverageReport;
 import dev.sheaf.miner.measure.FillRate;
 import dev.sheaf.miner.measure.OverlapPair;
 import dev.sheaf.vocab.Vocabulary;
+import dev.sheaf.vocab.io.OutputSet;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Files;
@@ -128,7 +129,8 @@ final class CoverageCommand implements Callable<Integer> {
         CoverageReport r;
         try {
             r = CoverageReport.read(file, v, options);
-            CoverageFiles.write(r, outDir);
+            CoverageReport written = r;
+            OutputSet.writeAll(outDir, set -> CoverageFiles.write(written, outDir));
         } catch (IOException e) {
             err.println("sheaf coverage: " + e.getMessage());
             return ExitCodes.FAILURE;

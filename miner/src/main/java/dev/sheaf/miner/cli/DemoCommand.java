@@ -3,6 +3,7 @@ package dev.sheaf.miner.cli;
 import dev.sheaf.miner.ingest.Ingest;
 import dev.sheaf.miner.ingest.IngestSummary;
 import dev.sheaf.miner.ingest.Listing;
+import dev.sheaf.miner.ingest.Problem;
 import dev.sheaf.miner.ingest.ProblemLog;
 import dev.sheaf.miner.ingest.Workspace;
 import dev.sheaf.miner.mine.Harvest;
@@ -15,6 +16,7 @@ import dev.sheaf.vocab.CheckReport;
 import dev.sheaf.vocab.Severity;
 import dev.sheaf.vocab.VocabularyChecker;
 import dev.sheaf.vocab.VocabularyFormatException;
+import dev.sheaf.vocab.io.OutputSet;
 import dev.sheaf.vocab.store.VocabularyFiles;
 import java.io.IOException;
 import java.io.PrintWriter;
@@ -94,9 +96,12 @@ final class DemoCommand implements Callable<Integer> {
                 });
                 harvest = run.finish();
             }
-            Files.createDirectories(harvestDir);
-            HarvestFiles.write(harvest, harvestDir);
-            ProblemLog.write(harvestDir.resolve("problems.csv"), read.problems());
+            Harvest mined = harvest;
+            List<Problem> readProblems = read.problems();
+            OutputSet.writeAll(harvestDir, set -> {
+                HarvestFiles.write(mined, harvestDir);
+                ProblemLog.write(harvestDir.resolve("problems.csv"), readProblems);
+            });
         } catch (IOException | RuntimeException e) {
             err.println("sheaf demo: mining failed: " + e.getMessage());
             return ExitCodes.FAILURE;

@@ -6,6 +6,7 @@ import dev.sheaf.miner.mine.HarvestOptions;
 import dev.sheaf.miner.mine.Harvester;
 import dev.sheaf.miner.mine.Score;
 import dev.sheaf.miner.text.AnalysisProfile;
+import dev.sheaf.vocab.io.OutputSet;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Files;
@@ -231,9 +232,10 @@ final class MineCommand implements Callable<Integer> {
             return ExitCodes.FAILURE;
         }
         try {
-            Files.createDirectories(outDir);
-            HarvestFiles.write(harvest, outDir);
-            f.writeProblems(outDir.resolve("problems.csv"), read.problems());
+            OutputSet.writeAll(outDir, set -> {
+                HarvestFiles.write(harvest, outDir);
+                f.writeProblems(outDir.resolve("problems.csv"), read.problems());
+            });
         } catch (IOException e) {
             err.println("sheaf mine: cannot write the harvest to " + outDir + ": " + e.getMessage()
                     + "; check that the folder is writable and has room");

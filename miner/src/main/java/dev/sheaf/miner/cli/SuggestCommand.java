@@ -11,6 +11,7 @@ import dev.sheaf.miner.suggest.Suggestion;
 import dev.sheaf.miner.suggest.SuggestionFiles;
 import dev.sheaf.miner.text.AnalysisProfile;
 import dev.sheaf.vocab.Vocabulary;
+import dev.sheaf.vocab.io.OutputSet;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Files;
@@ -175,8 +176,8 @@ final class SuggestCommand implements Callable<Integer> {
                 err.println("sheaf suggest: no harvest at " + harvestFile + "; mining the listings first (as 'sheaf mine' would) …");
                 err.flush();
                 h = mine(job, profile == null ? AnalysisProfile.defaults() : profile);
-                Files.createDirectories(harvestFile.getParent());
-                HarvestFiles.write(h, harvestFile.getParent());
+                Harvest mined = h;
+                OutputSet.writeAll(harvestFile.getParent(), set -> HarvestFiles.write(mined, harvestFile.getParent()));
                 err.println("sheaf suggest: wrote the harvest to " + harvestFile.getParent());
             } else {
                 err.println("sheaf suggest: harvest " + harvestFile + " does not exist; run 'sheaf mine' first or give --harvest FILE");
@@ -225,8 +226,7 @@ final class SuggestCommand implements Callable<Integer> {
             parents.removeIf(x -> !parentKinds.contains(x.kind()));
         }
         try {
-            Files.createDirectories(outDir);
-            SuggestionFiles.write(merges, parents, outDir);
+            OutputSet.writeAll(outDir, set -> SuggestionFiles.write(merges, parents, outDir));
         } catch (IOException e) {
             err.println("sheaf suggest: cannot write to " + outDir + ": " + e.getMessage() + "; check that the folder is writable");
             return ExitCodes.FAILURE;

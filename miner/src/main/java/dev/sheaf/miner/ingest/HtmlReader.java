@@ -13,7 +13,9 @@ import org.jsoup.Jsoup;
 import org.jsoup.nodes.Document;
 import org.jsoup.nodes.Element;
 import org.jsoup.nodes.Node;
+import org.jsoup.nodes.Range;
 import org.jsoup.nodes.TextNode;
+import org.jsoup.parser.Parser;
 import org.jsoup.select.Elements;
 
 /**
@@ -27,6 +29,12 @@ import org.jsoup.select.Elements;
  * {@link SpecLines#ID_LINES} fields ("SKU FH-000104 · Supplier: ...", "Item no.: ..."), else the
  * file name. Category from a meta tag, the breadcrumb, else a visible category pair. Identifier
  * pairs (SKU, supplier, model number ...) are never specs. Scripts, styles, templates, navigation, headers' menus and footers are ignored.
+ *
+ * <p>At most {@link SourceFile#writeLimit()} characters of text are kept per page (keys and values
+ * of specs count); the field that reaches the limit is cut and the rest of the page is not read,
+ * with a "too-large" problem at the line of the block where it stopped. Element positions cost
+ * memory, so they are tracked only for a page longer than the limit, or on a second reading when
+ * markup that repeats text (nested definition lists) went past it on the first.
  */
 final class HtmlReader implements ListingReader {
     private static final String IGNORED = "script, style, noscript, template, iframe, svg, canvas, nav, footer, "
@@ -45,7 +53,14 @@ final class HtmlReader implements ListingReader {
         if (html == null) {
             return;
         }
-        Document doc = Jsoup.parse(html);
+        if (!read(file, html, html.length() > file.writeLimit())) {
+            read(file, html, true);
+        }
+    }
+
+    /** False when the text went past the limit without positions tracked (nothing emitted then). */
+    private static boolean read(SourceFile file, String html, boolean track) {
+        Document doc = track ? Jsoup.parse(html, "", Parser.htmlParser().setTrackPosition(true)) : Jsoup.parse(html);
         String id = firstNonBlank(meta(doc, "product-id"), meta(doc, "sku"), meta(doc, "product:retailer_item_id"),
                 attr(doc, "[itemprop=sku]", "content"), text(doc, "[itemprop=sku]"), attr(doc, "[data-sku]", "data-sku"),
                 attr(doc, "[data-product-id]", "data-product-id"), null);
@@ -57,21 +72,31 @@ final class HtmlReader implements ListingReader {
         List<Field> fields = new ArrayList<>();
         String h1 = text(doc.body(), "h1");
         String title = firstNonBlank(meta(doc, "og:title"), h1, doc.title(), null);
-        if (title != null) {
-            fields.add(Field.of(FieldKind.TITLE, title));
-        }
         String description = firstNonBlank(meta(doc, "description"), meta(doc, "og:description"), null);
-        if (description != null) {
-            fields.add(Field.of(FieldKind.DESCRIPTION, description));
+        Walk walk = new Walk(fields, title, description, file.writeLimit(), track);
+        walk.at = doc.head();
+        try {
+            if (title != null) {
+                walk.keep(Field.of(FieldKind.TITLE, title));
+            }
+            if (description != null) {
+                walk.keep(Field.of(FieldKind.DESCRIPTION, description));
+            }
+            walk.element(doc.body());
+        } catch (Walk.Full full) {
+            if (!track) {
+                return false;
+            }
+            file.problem(full.position, "too-large", "only the first " + file.writeLimit() + " characters of text were read "
+                    + "(the limit for one listing); the rest of the page was left out. Split the page or raise the text limit");
         }
-        Walk walk = new Walk(fields, title, description);
-        walk.element(doc.body());
         if (fields.isEmpty()) {
             file.problem("", "empty", "the page has no title, headings, text or specs; expected a product page");
-            return;
+            return true;
         }
         file.emit(new Listing(firstNonBlank(id, walk.ids.id(), file.stem()), firstNonBlank(category, walk.ids.category(), ""),
                 file.display(), "", fields));
+        return true;
     }
 
     /** The charset a page declares in a meta tag, found by Tika's HTML detector. */
@@ -91,17 +116,57 @@ final class HtmlReader implements ListingReader {
         private boolean titleSkipped;
         private final Set<String> seenSpecs = new LinkedHashSet<>();
         final SpecLines.Identifiers ids = new SpecLines.Identifiers();
+        private final int limit;
+        private final boolean tracked;
+        private long used;
+        /** The block being read, for the position of a cut. */
+        Element at;
 
-        Walk(List<Field> fields, String title, String description) {
+        /** The text limit was reached; thrown to stop the walk. */
+        static final class Full extends RuntimeException {
+            final String position;
+
+            Full(String position) {
+                super(null, null, false, false);
+                this.position = position;
+            }
+        }
+
+        Walk(List<Field> fields, String title, String description, int limit, boolean tracked) {
             this.fields = fields;
             this.title = title;
             this.description = description;
+            this.limit = limit;
+            this.tracked = tracked;
+        }
+
+        /** Adds a field within the text limit; the one that reaches it is cut (a spec is left out) and the walk stops. */
+        void keep(Field f) {
+            long n = (long) f.key().length() + f.text().length();
+            if (used + n <= limit) {
+                used += n;
+                fields.add(f);
+                return;
+            }
+            if (tracked) {
+                int room = (int) (limit - used);
+                if (f.kind() != FieldKind.SPEC && room > 0) {
+                    int end = Character.isHighSurrogate(f.text().charAt(room - 1)) ? room - 1 : room;
+                    if (end > 0) {
+                        fields.add(Field.of(f.kind(), f.text().substring(0, end)));
+                    }
+                }
+            }
+            used = limit;
+            Range r = at == null ? null : at.sourceRange();
+            throw new Full(r != null && r.isTracked() ? "line " + r.start().lineNumber() : "");
         }
 
         void element(Element e) {
             if (e == null) {
                 return;
             }
+            at = e;
             switch (e.normalName()) {
                 case "h1", "h2", "h3", "h4", "h5", "h6" -> heading(e.text().strip());
                 case "table" -> table(e);
@@ -145,7 +210,7 @@ final class HtmlReader implements ListingReader {
                 titleSkipped = true;
                 return;
             }
-            fields.add(Field.of(FieldKind.HEADING, t));
+            keep(Field.of(FieldKind.HEADING, t));
         }
 
         private void paragraph(Element p) {
@@ -180,7 +245,7 @@ final class HtmlReader implements ListingReader {
             if (para.length() > 0) {
                 String t = para.toString();
                 if (!t.equals(description) && !(t.equals(title) && kind == FieldKind.TEXT && !titleSkipped)) {
-                    fields.add(Field.of(kind, t));
+                    keep(Field.of(kind, t));
                 }
                 para.setLength(0);
             }
@@ -202,7 +267,7 @@ final class HtmlReader implements ListingReader {
                             spec(pair.key(), pair.text());
                         }
                     } else {
-                        fields.add(Field.of(FieldKind.BULLET, t.replaceAll("\\s+", " ")));
+                        keep(Field.of(FieldKind.BULLET, t.replaceAll("\\s+", " ")));
                     }
                 }
                 for (Element nested : li.select("> ul, > ol, > dl, > table")) {
@@ -268,7 +333,7 @@ final class HtmlReader implements ListingReader {
                 return;
             }
             if (seenSpecs.add(key + "\u0000" + value)) {
-                fields.add(Field.spec(key, value));
+                keep(Field.spec(key, value));
             }
         }
 

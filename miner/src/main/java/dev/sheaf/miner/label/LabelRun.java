@@ -8,6 +8,7 @@ import dev.sheaf.miner.ingest.Problem;
 import dev.sheaf.miner.ingest.ProblemLog;
 import dev.sheaf.miner.ingest.SourceSpec;
 import dev.sheaf.vocab.io.AtomicFiles;
+import dev.sheaf.vocab.io.OutputSet;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.ByteBuffer;
@@ -131,7 +132,7 @@ public final class LabelRun {
         Collector(Path outDir) throws IOException {
             this.outDir = outDir;
             Files.createDirectories(outDir);
-            this.spillFile = Files.createTempFile(outDir, ".assignments-", ".spill");
+            this.spillFile = AtomicFiles.scratchFile(outDir, "assignments");
             this.spill = FileChannel.open(spillFile, StandardOpenOption.WRITE, StandardOpenOption.READ);
             this.cols = LabelColumns.of(labeler.vocabulary());
             this.gaps = new GapTerms(labeler.analysis());
@@ -250,7 +251,17 @@ public final class LabelRun {
             }
         }
 
+        /** Writes every export as one {@link OutputSet}: on a failure half-way, the earlier exports are all kept. */
         LabelRunSummary finish(List<Problem> problems, long filesSeen, long filesRead, long bytes, long t0) throws IOException {
+            try (OutputSet set = OutputSet.open(outDir)) {
+                LabelRunSummary s = writeExports(problems, filesSeen, filesRead, bytes, t0);
+                set.commit();
+                return s;
+            }
+        }
+
+        private LabelRunSummary writeExports(List<Problem> problems, long filesSeen, long filesRead, long bytes, long t0)
+                throws IOException {
             List<Spilled> sorted = new ArrayList<>(rows);
             sorted.sort((x, y) -> LabelExports.FILE_ORDER.compare(x.row, y.row));
             List<LabelRow> table = new ArrayList<>(sorted.size());

@@ -54,6 +54,7 @@ import dev.sheaf.vocab.Concept;
 import dev.sheaf.vocab.ConceptLabel;
 import dev.sheaf.vocab.LabelKind;
 import dev.sheaf.vocab.Vocabulary;
+import dev.sheaf.vocab.io.OutputSet;
 import dev.sheaf.vocab.store.VocabularyFiles;
 import java.io.IOException;
 import java.io.PrintWriter;
@@ -107,6 +108,16 @@ public final class AuditRun {
      */
     public static AuditSummary run(Workspace ws, Path outDir, PrintWriter progress, List<Listing> listings,
                                    List<Problem> readProblems) throws IOException {
+        // every file of the audit (labels, measures, the page) is replaced together, or none is
+        try (OutputSet set = OutputSet.open(outDir)) {
+            AuditSummary s = run(ws, outDir, progress, listings, readProblems, set);
+            set.commit();
+            return s;
+        }
+    }
+
+    private static AuditSummary run(Workspace ws, Path outDir, PrintWriter progress, List<Listing> listings,
+                                    List<Problem> readProblems, OutputSet set) throws IOException {
         List<String> problems = new ArrayList<>();
         Files.createDirectories(outDir);
         Vocabulary vocab = VocabularyFiles.read(ws.vocabulary()).vocabulary();
@@ -130,7 +141,7 @@ public final class AuditRun {
         if (ls.problems() > 0) {
             problems.add(ls.problems() + " input problem(s) while labelling; see " + labelDir.resolve(LabelRun.PROBLEMS_CSV));
         }
-        Path assignments = labelDir.resolve(AssignmentsJsonl.FILE_NAME);
+        Path assignments = set.current(labelDir.resolve(AssignmentsJsonl.FILE_NAME)); // written, not yet in place
 
         // 2. coverage, from assignments.jsonl
         Path coverageDir = outDir.resolve("coverage");

@@ -81,6 +81,55 @@ class HostileInputTest {
     }
 
     @Test
+    void anHtmlPageIsCutAtTheTextLimitWithAProblemAtItsLine(@TempDir Path dir) throws IOException {
+        StringBuilder html = new StringBuilder("<html><head><title>Long Lantern</title></head><body>\n<h1>Long Lantern</h1>\n");
+        html.append("<p>Material: steel</p>\n");
+        for (int i = 0; i < 40; i++) {
+            html.append("<p>").append(("paragraph " + i + " of lantern text. ").repeat(20)).append("</p>\n");
+        }
+        Path p = Fixtures.write(dir, "long.html", html.toString().getBytes(StandardCharsets.UTF_8));
+        Fixtures.Result r = Fixtures.read(Ingest.builder().source(SourceSpec.of(p)).threads(1).maxTextChars(2000));
+        Listing l = r.only();
+        assertEquals("Long Lantern", l.title());
+        assertEquals("steel", Fixtures.spec(l, "Material"));
+        int kept = l.fields().stream().mapToInt(f -> f.key().length() + f.text().length()).sum();
+        assertEquals(2000, kept, "the field that reaches the limit is cut at it: " + l.fields());
+        assertEquals(List.of("too-large"), r.problemKinds());
+        // title and spec fill 25 characters, each paragraph 579: the fourth paragraph (line 7 of the page) reaches 2,000
+        assertEquals("line 7", r.problems().get(0).position());
+        assertTrue(l.fields().get(l.fields().size() - 1).text().startsWith("paragraph 3 of"));
+        assertTrue(l.fields().stream().noneMatch(f -> f.text().contains("paragraph 4 ")), "nothing after the cut is read");
+    }
+
+    @Test
+    void anHtmlPageThatRepeatsItsTextPastTheLimitIsCutToo(@TempDir Path dir) throws IOException {
+        // 300 nested definition lists: each value holds every deeper one, so the text read grows with the square of
+        // the page (a short page, under the limit, read without positions first)
+        StringBuilder html = new StringBuilder("<html><head><title>Nested Lantern</title></head><body>\n");
+        for (int i = 0; i < 300; i++) {
+            html.append("<dl><dt>Key ").append(i).append("</dt><dd>value ").append(i).append('\n');
+        }
+        html.append("</dd></dl>".repeat(300)).append("</body></html>\n");
+        assertTrue(html.length() < 20_000);
+        Path p = Fixtures.write(dir, "nested.html", html.toString().getBytes(StandardCharsets.UTF_8));
+        Fixtures.Result r = Fixtures.read(Ingest.builder().source(SourceSpec.of(p)).threads(1).maxTextChars(20_000));
+        Listing l = r.only();
+        assertTrue(l.fields().stream().mapToInt(f -> f.key().length() + f.text().length()).sum() <= 20_000);
+        assertEquals(List.of("too-large"), r.problemKinds());
+        assertTrue(r.problems().get(0).position().matches("line \\d+"), r.problems().toString());
+    }
+
+    @Test
+    void anHtmlPageAtTheLimitIsWhole(@TempDir Path dir) throws IOException {
+        String html = "<html><head><title>Exact Lantern</title></head><body><h1>Exact Lantern</h1><p>Material: steel</p></body></html>";
+        Path p = Fixtures.write(dir, "exact.html", html.getBytes(StandardCharsets.UTF_8));
+        Fixtures.Result r = Fixtures.read(Ingest.builder().source(SourceSpec.of(p)).threads(1)
+                .maxTextChars("Exact Lantern".length() + "Materialsteel".length()));
+        assertEquals("steel", Fixtures.spec(r.only(), "Material"));
+        assertTrue(r.problems().isEmpty(), r.problems().toString());
+    }
+
+    @Test
     void linksThatLeadNowhereAreUnreadableProblems(@TempDir Path dir) throws IOException {
         Files.writeString(dir.resolve("good.txt"), "Good Lantern\n\nMaterial: steel\n");
         Files.createSymbolicLink(dir.resolve("self.txt"), Path.of("self.txt"));
