@@ -1,6 +1,7 @@
 package dev.sheaf.vocab.store;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assertions.fail;
 
@@ -107,7 +108,10 @@ class CrashDuringSaveTest {
             }
             p.destroyForcibly();
             p.waitFor(30, TimeUnit.SECONDS);
-            reader.join(10_000);
+            // every line the child printed before it died must be read before "done" is trusted: on a
+            // loaded machine a short wait let a stale count through and the check below failed
+            reader.join(120_000);
+            assertFalse(reader.isAlive(), "run " + run + ": the child's output was not read to its end");
             int done = lastDone.get();
             if (saving.get() > lastSaved.get()) {
                 midSave++; // a save had begun and not finished when the kill came
