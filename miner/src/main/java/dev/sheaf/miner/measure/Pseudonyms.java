@@ -67,8 +67,7 @@ public final class Pseudonyms {
         if (!Files.exists(keyFile)) {
             byte[] k = new byte[KEY_BYTES];
             new SecureRandom().nextBytes(k);
-            // AtomicFiles writes through Files.createTempFile, which is owner-only on POSIX.
-            AtomicFiles.writeString(keyFile, HexFormat.of().formatHex(k) + "\n");
+            AtomicFiles.writeOwnerOnly(keyFile, HexFormat.of().formatHex(k) + "\n");
             return new Pseudonyms(k);
         }
         String text = Files.readString(keyFile, StandardCharsets.US_ASCII).strip();

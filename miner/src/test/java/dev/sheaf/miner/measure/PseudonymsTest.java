@@ -66,6 +66,10 @@ class PseudonymsTest {
         assertTrue(Files.exists(keyFile));
         assertTrue(Files.readString(keyFile).strip().matches("[0-9a-f]{64}"));
         assertEquals(first, Pseudonyms.fromKeyFile(keyFile).of("ines"));
+        if (keyFile.getFileSystem().supportedFileAttributeViews().contains("posix")) {
+            // the key lets anyone undo the pseudonyms: readable by its owner only
+            assertEquals("rw-------", java.nio.file.attribute.PosixFilePermissions.toString(Files.getPosixFilePermissions(keyFile)));
+        }
     }
 
     @Test

@@ -60,14 +60,26 @@ public final class AtomicFiles {
      * first copied to {@code target + "~"} so one earlier version is always at hand.
      */
     public static void write(Path target, Body body, boolean keepBackup) throws IOException {
+        write(target, body, keepBackup, false);
+    }
+
+    /**
+     * Writes a secret (a key) atomically: the file is created readable and writable by its owner
+     * only (on file systems with POSIX permissions), before any byte is written to it.
+     */
+    public static void writeOwnerOnly(Path target, String content) throws IOException {
+        write(target, out -> out.write(content.getBytes(StandardCharsets.UTF_8)), false, true);
+    }
+
+    private static void write(Path target, Body body, boolean keepBackup, boolean ownerOnly) throws IOException {
         Path abs = target.toAbsolutePath().normalize();
         OutputSet set = OutputSet.covering(abs);
         if (set == null) {
-            writeInPlace(abs, body, keepBackup);
+            writeInPlace(abs, body, keepBackup, ownerOnly);
             return;
         }
         Path staged = set.stagingPath(abs); // put in place, with the rest of the set, by its commit
-        writeInPlace(staged, body, false);
+        writeInPlace(staged, body, false, ownerOnly);
         try {
             set.stage(staged, abs, keepBackup);
         } catch (IOException e) {
@@ -76,10 +88,10 @@ public final class AtomicFiles {
         }
     }
 
-    private static void writeInPlace(Path abs, Body body, boolean keepBackup) throws IOException {
+    private static void writeInPlace(Path abs, Body body, boolean keepBackup, boolean ownerOnly) throws IOException {
         Path dir = abs.getParent();
         Files.createDirectories(dir);
-        Path tmp = newTempFile(dir, abs.getFileName() + TMP);
+        Path tmp = newTempFile(dir, abs.getFileName() + TMP, ownerOnly);
         boolean done = false;
         try {
             try (FileChannel ch = FileChannel.open(tmp, StandardOpenOption.WRITE, StandardOpenOption.TRUNCATE_EXISTING);
@@ -103,7 +115,7 @@ public final class AtomicFiles {
     static void replace(Path tmp, Path target, boolean keepBackup) throws IOException {
         if (keepBackup && Files.exists(target)) {
             Path backup = target.resolveSibling(target.getFileName() + "~");
-            Path btmp = newTempFile(target.getParent(), target.getFileName() + ".bak" + TMP);
+            Path btmp = newTempFile(target.getParent(), target.getFileName() + ".bak" + TMP, false);
             boolean done = false;
             try {
                 Files.copy(target, btmp, StandardCopyOption.REPLACE_EXISTING);
@@ -139,7 +151,7 @@ public final class AtomicFiles {
      */
     public static Path scratchFile(Path dir, String name) throws IOException {
         Files.createDirectories(dir);
-        return newTempFile(dir, name + SPILL);
+        return newTempFile(dir, name + SPILL, true); // a run's private working data
     }
 
     /** A fresh, empty hidden folder in {@code dir} named like the temporaries ({@code .<random hex>.<name>.tmp}). */
@@ -229,13 +241,18 @@ public final class AtomicFiles {
      * by their owner only, this one gets the ordinary permissions (the process umask), because our
      * outputs are reports and tables meant to be shared.
      */
-    private static Path newTempFile(Path dir, String suffix) throws IOException {
+    private static Path newTempFile(Path dir, String suffix, boolean ownerOnly) throws IOException {
         sweepStale(dir);
+        java.nio.file.attribute.FileAttribute<?>[] attrs = ownerOnly
+                && dir.getFileSystem().supportedFileAttributeViews().contains("posix")
+                ? new java.nio.file.attribute.FileAttribute<?>[] {java.nio.file.attribute.PosixFilePermissions.asFileAttribute(
+                        java.nio.file.attribute.PosixFilePermissions.fromString("rw-------"))}
+                : new java.nio.file.attribute.FileAttribute<?>[0];
         java.util.concurrent.ThreadLocalRandom rnd = java.util.concurrent.ThreadLocalRandom.current();
         for (int attempt = 0; ; attempt++) {
             Path p = dir.resolve("." + Long.toHexString(rnd.nextLong()) + "." + suffix);
             try {
-                return Files.createFile(p);
+                return Files.createFile(p, attrs);
             } catch (java.nio.file.FileAlreadyExistsException e) {
                 if (attempt > 100) {
                     throw e;
