@@ -4,11 +4,9 @@ import dev.sheaf.miner.ingest.Listing;
 import dev.sheaf.miner.text.Analysis;
 import java.io.IOException;
 import java.io.UncheckedIOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
-import java.util.Comparator;
 import java.util.List;
 import java.util.concurrent.ArrayBlockingQueue;
 import java.util.concurrent.ConcurrentHashMap;
@@ -18,7 +16,6 @@ import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import java.util.concurrent.atomic.AtomicLong;
-import java.util.stream.Stream;
 
 /**
  * One harvest from start to finish. Pass 1 runs while listings stream in: producers hand batches to
@@ -38,6 +35,7 @@ final class MineJob {
     final int threads;
     final List<String> sourcesParameter;
     final Harvester.Progress progress;
+    private final RunFolder runFolder;
     private final Path tempDir;
     private final long memoryBudget;
 
@@ -64,8 +62,8 @@ final class MineJob {
         this.progress = progress;
         this.memoryBudget = memoryBudget;
         try {
-            Files.createDirectories(tempRoot);
-            this.tempDir = Files.createTempDirectory(tempRoot, "sheaf-mine-");
+            this.runFolder = RunFolder.create(tempRoot);
+            this.tempDir = runFolder.dir;
         } catch (IOException e) {
             throw new UncheckedIOException("cannot create a temporary folder under " + tempRoot + " (" + e.getMessage()
                     + "); give a writable temp folder", e);
@@ -271,11 +269,7 @@ final class MineJob {
                 w.close();
             }
         }
-        try (Stream<Path> s = Files.walk(tempDir)) {
-            s.sorted(Comparator.reverseOrder()).forEach(p -> p.toFile().delete());
-        } catch (IOException ignored) {
-            // best effort: the folder lives under the temp root
-        }
+        runFolder.close();
     }
 
     // ------------------------------------------------------------------ counting passes and scoring
