@@ -124,8 +124,10 @@ public final class LabelBenchmark {
         Result an = null;
         Result lab = null;
         Result re = null;
+        // one segmenter per thread for every round, as the labeler keeps one per thread: a fresh one each
+        // round would start with an empty term cache and make the floor slower than it is
+        ThreadLocal<Segmenter> segs = ThreadLocal.withInitial(analysis::newSegmenter);
         for (int round = 0; round < rounds; round++) { // the first round warms the JIT
-            ThreadLocal<Segmenter> segs = ThreadLocal.withInitial(analysis::newSegmenter);
             an = time(pool, all, l -> {
                 long[] n = {0};
                 segs.get().analyze(l, (f, p, ids, st, en, len) -> n[0] += len);

@@ -199,6 +199,39 @@ class LabelerTest {
     }
 
     @Test
+    void aSpecValueOfSeparatorsOnlySaysNothingAboutItsKey() {
+        // it used to stop the labeler (the value split into no words at all)
+        assertEquals(Map.of(), concepts(listing("FH-4", "jackets", Field.spec("Hood", "/"))));
+        assertEquals(Map.of(), concepts(listing("FH-4", "jackets", Field.spec("Hood", " , ; "))));
+        // a long value that starts with a separator is a statement; one starting with a negation word is read as before
+        assertEquals(Map.of("hooded", "stated"), concepts(listing("FH-4", "jackets", Field.spec("Hood", "/ detachable, stows in collar"))));
+        assertEquals(Map.of("hooded", "negated"), concepts(listing("FH-4", "jackets", Field.spec("Hood", "NONE, ;"))));
+        assertEquals(Map.of("hooded", "negated"), concepts(listing("FH-4", "jackets", Field.spec("Hood", "without hood"))));
+        assertEquals(Map.of("hooded", "stated"), concepts(listing("FH-4", "jackets", Field.spec("Hood", "Unknown colour"))));
+        assertEquals(Map.of(), concepts(listing("FH-4", "jackets", Field.spec("Hood", "Unknown."))));
+    }
+
+    @Test
+    void aWordThatStartsManyLabelsFindsEachOfThemAndTheLongest() {
+        // more than eight labels continue "pack" (the trie searches a long run of children by halving)
+        List<Concept> cs = new ArrayList<>();
+        String[] next = {"cover", "liner", "strap", "frame", "lid", "pocket", "zip", "belt", "harness", "sack", "weight", "volume"};
+        for (String w : next) {
+            cs.add(Concept.builder("pack-" + w).prefLabel("pack " + w).build());
+        }
+        cs.add(Concept.builder("pack").prefLabel("pack").build());
+        cs.add(Concept.builder("pack-lid-pocket").prefLabel("pack lid pocket").build());
+        Labeler l = Labeler.of(Vocabulary.of(SchemeInfo.of("t", "t"), cs, List.of(), List.of()), Analysis.of(AnalysisProfile.defaults()));
+        for (String w : next) {
+            assertEquals(List.of("pack-" + w), ids(l, "Pack " + w), w);
+        }
+        assertEquals(List.of("pack"), ids(l, "pack bag"));
+        assertEquals(List.of("pack"), ids(l, "pack. cover"), "a break in the text is no edge of the trie");
+        assertEquals(List.of("pack-lid-pocket"), ids(l, "pack lid pocket"));
+        assertEquals(List.of("pack", "pack-lid"), ids(l, "pack lid, pack"));
+    }
+
+    @Test
     void yesNoFacetsAreAssignedThroughTheirOwnLabels() {
         assertEquals(Map.of("packable", "stated"), concepts("jackets", "Packs into its own pocket"));
         assertEquals(Map.of("packable", "negated"), concepts("jackets", "Not packable"));
