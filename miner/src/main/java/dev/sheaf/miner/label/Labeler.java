@@ -190,6 +190,8 @@ public final class Labeler {
                     notes.add("facet " + f.id() + " has unit \"" + unit + "\", which Sheaf cannot convert to; its values are read "
                             + "as written (quantities in exactly that unit, or a lone number in a spec value); known units are "
                             + "kg, g, lb, oz, m, cm, mm, in, L, mL, fl oz, gal, °C, °F, mm H2O, FP, lm, h, min, D, person, season");
+                } else {
+                    noteUnitReadOtherwise(f, unit, dim);
                 }
             }
             nfs.add(new NumberFacet(f.id(), f.facet(), dim));
@@ -213,6 +215,24 @@ public final class Labeler {
         this.trie = tb.build();
         this.labelsCompiled = compiled;
         this.workers = ThreadLocal.withInitial(Worker::new);
+    }
+
+    /**
+     * A note when a spec value in the facet's own unit, under one of the facet's labels as key, is
+     * read as another dimension than the unit's: "Waterproof rating: 1000 mm" is a water column
+     * (mm H2O, decision 062), so a waterproof facet in "mm" (a length) could take none of its values.
+     */
+    private void noteUnitReadOtherwise(Concept facet, String unit, Dimension dim) {
+        for (ConceptLabel l : facet.labels()) {
+            java.util.Optional<dev.sheaf.miner.text.Quantity> q = dev.sheaf.miner.text.Quantities.parse(l.text(), "1000 " + unit);
+            if (q.isPresent() && q.get().dimension() != dim) {
+                notes.add("facet " + facet.id() + " has unit \"" + unit + "\", a " + word(dim) + ", but under its label \""
+                        + l.text() + "\" a value such as \"1000 " + unit + "\" is read as a " + word(q.get().dimension())
+                        + " (" + q.get().unit() + "): such values cannot be converted to the facet's unit and are reported "
+                        + "as unreadable; give the facet the unit \"" + q.get().unit() + "\"");
+                return;
+            }
+        }
     }
 
     private byte[] wordRoles() {

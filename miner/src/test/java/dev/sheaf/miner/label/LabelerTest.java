@@ -330,6 +330,39 @@ class LabelerTest {
     }
 
     @Test
+    void aWaterproofRatingIsAWaterColumnNotALength() {
+        // the quantity reader takes "20,000 mm" under a waterproof key as mm H2O (decision 062); a facet in
+        // plain "mm" (a length) can take none of those values, and says so when compiled
+        java.util.function.Function<String, Labeler> withUnit = unit -> Labeler.of(Vocabulary.of(SchemeInfo.of("t", "t"), List.of(
+                Concept.builder("waterproof-rating").prefLabel("Waterproof rating").altLabel("hydrostatic head")
+                        .facet(dev.sheaf.vocab.FacetProperties.number(unit, List.of(new dev.sheaf.vocab.Bucket("10,000 mm and up", 10000.0, null))))
+                        .build(),
+                Concept.builder("pole-diameter").prefLabel("Pole diameter")
+                        .facet(dev.sheaf.vocab.FacetProperties.number("mm", List.of())).build()), List.of(), List.of()),
+                Analysis.of(AnalysisProfile.defaults()));
+        Listing l = listing("T", "tents", Field.spec("Waterproof rating", "20,000 mm"), Field.spec("Pole diameter", "8.5 mm"),
+                Field.of(FieldKind.BULLET, "Fly with a 3,000mm hydrostatic head"));
+
+        Labeler mm = withUnit.apply("mm");
+        assertEquals(1, mm.notes().size(), mm.notes().toString());
+        assertTrue(mm.notes().get(0).contains("waterproof-rating") && mm.notes().get(0).contains("\"mm H2O\""), mm.notes().get(0));
+        Assignments wrong = mm.label(l);
+        assertEquals(1, wrong.invalid().size(), wrong.toString());
+        assertTrue(wrong.invalid().get(0).reason().contains("water column"), wrong.invalid().get(0).reason());
+
+        Labeler water = withUnit.apply("mm H2O");
+        assertEquals(List.of(), water.notes());
+        Assignments right = water.label(l);
+        assertEquals(List.of(), right.invalid());
+        List<Assignment> ratings = right.assignments().stream().filter(a -> a.conceptId().equals("waterproof-rating")).toList();
+        assertEquals(List.of(3000.0, 20000.0), ratings.stream().map(Assignment::value).toList());
+        assertEquals("mm H2O", ratings.get(1).unit());
+        assertEquals("10,000 mm and up", ratings.get(1).bucket());
+        assertEquals("3,000mm", ratings.get(0).evidence().get(0).text());
+        assertEquals(8.5, right.assignments().stream().filter(a -> a.conceptId().equals("pole-diameter")).findFirst().orElseThrow().value());
+    }
+
+    @Test
     void aLabelWithABreakCharacterMatchesAcrossABreakThereAndNowhereElse() {
         Vocabulary v = Vocabulary.of(SchemeInfo.of("t", "t"), List.of(
                 Concept.builder("adjustable-hood").prefLabel("adjustable hood").altLabel("adj. hd").build(),
