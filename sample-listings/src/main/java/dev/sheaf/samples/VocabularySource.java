@@ -153,7 +153,7 @@ final class VocabularySource {
         c("ipx4", "IPX4", List.of("IPX4 water resistant"), List.of(), List.of("water-resistant"), List.of(), "IP code (IEC 60529): a rating claim.");
         c("ipx7", "IPX7", List.of("IPX7 waterproof"), List.of(), List.of("waterproof"), List.of(), "IP code (IEC 60529): a rating claim.");
         c("ipx8", "IPX8", List.of(), List.of(), List.of("waterproof"), List.of(), "IP code (IEC 60529): a rating claim.");
-        facet("waterproof-rating", "Waterproof rating", false, List.of("rain-shells", "tents"), "number", "mm",
+        facet("waterproof-rating", "Waterproof rating", false, List.of("rain-shells", "tents"), "number", "mm H2O",
                 List.of(b("under-5000-mm", "under 5,000 mm", null, 5000.0), b("5000-9999-mm", "5,000–9,999 mm", 5000.0, 10000.0),
                         b("10000-19999-mm", "10,000–19,999 mm", 10000.0, 20000.0), b("20000-mm-plus", "20,000 mm and up", 20000.0, null)),
                 true, "Hydrostatic head (HH), 'water column'; written 20,000 mm, 20000mm, 20K mm, 20K MM H2O. Regulated: review before publishing.");

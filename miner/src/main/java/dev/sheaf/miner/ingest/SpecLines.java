@@ -17,6 +17,12 @@ import java.util.regex.Pattern;
  * they give the listing id and category and never become specs (see {@link Identifier}). A line of
  * several pairs joined by {@code ·}, {@code |}, {@code •} or a wide gap ("SKU FH-000104 · Supplier:
  * Northwind") is split into its pairs, never read as one key. See docs/decisions/107.
+ *
+ * <p>In Markdown, a pipe table (a header row, a delimiter row such as {@code |---|---|}, then rows)
+ * is a spec table: each row's first cell is the key and its other cells the value
+ * ({@code | Weight | 1.2 kg |}), or, with one row under a header of three or more cells, the header
+ * cells are the keys of that row's values (a table laid out sideways), as in HTML tables. See
+ * docs/decisions/108.
  */
 final class SpecLines {
     /**
@@ -198,8 +204,15 @@ final class SpecLines {
         return Character.isDigit(key.charAt(key.length() - 1)) && Character.isDigit(value.charAt(0));
     }
 
-    /** Listing id and category named by spec lines ("SKU: FH-1", "Category: tents"), then the other fields. */
-    record Parsed(String id, String category, List<Field> fields) {
+    /**
+     * Listing id and category named by spec lines ("SKU: FH-1", "Category: tents"), then the other
+     * fields, and what could not be read as written (malformed Markdown tables), by line.
+     */
+    record Parsed(String id, String category, List<Field> fields, List<LineProblem> problems) {
+    }
+
+    /** Something on line {@code line} (1-based) that was read otherwise than it was written, and why. */
+    record LineProblem(int line, String reason) {
     }
 
     /**
@@ -239,6 +252,7 @@ final class SpecLines {
             fields.add(Field.of(FieldKind.TITLE, title));
         }
         StringBuilder para = new StringBuilder();
+        List<LineProblem> problems = new ArrayList<>();
         for (int i = 0; i < lines.length; i++) {
             if (i == titleLine) {
                 continue;
@@ -264,6 +278,15 @@ final class SpecLines {
                         fields.add(spec);
                     }
                     i = j - 1;
+                    continue;
+                }
+            }
+            if (markdown && i + 1 < lines.length && tableRow(line) && delimiterRow(lines[i + 1])) {
+                int end = table(lines, i, fields, ids, nonEmpty, problems);
+                if (end > i) {
+                    flush(para, fields);
+                    nonEmpty += end - i - 1;
+                    i = end - 1;
                     continue;
                 }
             }
@@ -303,7 +326,145 @@ final class SpecLines {
             }
         }
         flush(para, fields);
-        return new Parsed(ids.id(), ids.category(), fields);
+        return new Parsed(ids.id(), ids.category(), fields, problems);
+    }
+
+    /** A delimiter row of a pipe table: cells of dashes, perhaps with colons, between pipes. */
+    private static final Pattern DELIMITER_ROW = Pattern.compile("^\\s{0,3}\\|?\\s*:?-+:?\\s*(\\|\\s*:?-+:?\\s*)*\\|?\\s*$");
+
+    /** A delimiter row holds a pipe: a line of dashes alone is a rule (or makes the line above a heading). */
+    private static boolean delimiterRow(String line) {
+        return line.indexOf('|') >= 0 && DELIMITER_ROW.matcher(line).matches();
+    }
+
+    /** A line with an unescaped {@code |}: a row of a table once its header and delimiter rows are seen. */
+    private static boolean tableRow(String line) {
+        for (int k = 0; k < line.length(); k++) {
+            char c = line.charAt(k);
+            if (c == '\\') {
+                k++;
+            } else if (c == '|') {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /**
+     * The cells of a table row: the text between unescaped pipes, a leading and a trailing pipe
+     * dropped, {@code \\|} read as {@code |}, each cell stripped and cleaned of Markdown emphasis.
+     */
+    static List<String> cells(String line) {
+        String t = line.strip();
+        List<String> out = new ArrayList<>();
+        StringBuilder cell = new StringBuilder();
+        int from = t.startsWith("|") ? 1 : 0;
+        boolean open = false;
+        for (int k = from; k < t.length(); k++) {
+            char c = t.charAt(k);
+            if (c == '\\' && k + 1 < t.length() && t.charAt(k + 1) == '|') {
+                cell.append('|');
+                k++;
+                open = true;
+            } else if (c == '|') {
+                out.add(clean(cell.toString(), true).replace('\t', ' '));
+                cell.setLength(0);
+                open = false;
+            } else {
+                cell.append(c);
+                open |= !Character.isWhitespace(c);
+            }
+        }
+        if (open || from == 0 && out.isEmpty()) {
+            out.add(clean(cell.toString(), true).replace('\t', ' '));
+        }
+        return out;
+    }
+
+    /**
+     * Reads the pipe table whose header row is {@code lines[from]} (its delimiter row follows) into
+     * fields. The table ends at a blank line or a line without a pipe. A delimiter row with another
+     * number of cells than the header makes no table (Markdown's rule): the lines are read as text
+     * and a problem says why; {@code from} is returned. A row with another number of cells than the
+     * header is read as it stands, with a problem.
+     *
+     * @return the line after the table
+     */
+    private static int table(String[] lines, int from, List<Field> fields, Identifiers ids, int nonEmpty,
+                             List<LineProblem> problems) {
+        List<String> head = cells(lines[from]);
+        int width = cells(lines[from + 1]).size();
+        if (width != head.size()) {
+            problems.add(new LineProblem(from + 2, "a Markdown table's delimiter row has " + width + " cells but its header row "
+                    + head.size() + ", so it is no table; its lines are read as text (give both rows the same cells)"));
+            return from;
+        }
+        int end = from + 2;
+        while (end < lines.length && !lines[end].isBlank() && tableRow(lines[end])) {
+            end++;
+        }
+        List<List<String>> rows = new ArrayList<>();
+        for (int k = from + 2; k < end; k++) {
+            List<String> row = cells(lines[k]);
+            if (row.size() != width) {
+                problems.add(new LineProblem(k + 1, "a Markdown table row has " + row.size() + " cells under a header of " + width
+                        + "; read as it stands (first cell the key, the others its value)"));
+            }
+            rows.add(row);
+        }
+        int line = nonEmpty + 1; // the delimiter row's place among the non-empty lines (the header's is nonEmpty)
+        if (rows.size() == 1 && width > 2 && rows.get(0).size() == width) {
+            // a header of keys over one row of values: a spec table laid out sideways
+            for (int c = 0; c < width; c++) {
+                String key = head.get(c);
+                String value = rows.get(0).get(c);
+                if (!value.isEmpty()) {
+                    if (key.isEmpty()) {
+                        fields.add(Field.of(FieldKind.TEXT, value));
+                    } else {
+                        tablePair(key, value, fields, ids, line + 1 <= ID_LINES);
+                    }
+                }
+            }
+            return end;
+        }
+        // cells joined by a pipe, a break character, so that no term is mined across two column titles
+        String title = String.join(" | ", head.stream().filter(x -> !x.isEmpty()).toList());
+        if (!title.isEmpty()) {
+            fields.add(Field.of(FieldKind.HEADING, title));
+        }
+        for (List<String> row : rows) {
+            line++;
+            String key = row.isEmpty() ? "" : row.get(0);
+            List<String> values = new ArrayList<>();
+            for (int c = 1; c < row.size(); c++) {
+                if (!row.get(c).isEmpty()) {
+                    values.add(row.get(c));
+                }
+            }
+            String value = String.join(", ", values);
+            if (key.isEmpty() && value.isEmpty()) {
+                continue;
+            }
+            if (value.isEmpty()) {
+                fields.add(Field.of(FieldKind.HEADING, key)); // "| **Packing** | |": a section of the table
+            } else if (key.isEmpty()) {
+                fields.add(Field.of(FieldKind.TEXT, value));
+            } else {
+                tablePair(key, value, fields, ids, line <= ID_LINES);
+            }
+        }
+        return end;
+    }
+
+    /** A key cell and its value (neither empty): a spec when the key is one ({@link #spec}), else the row's text. */
+    private static void tablePair(String key, String value, List<Field> fields, Identifiers ids, boolean early) {
+        Field spec = spec(key + "\t" + value);
+        if (spec == null) {
+            fields.add(Field.of(FieldKind.TEXT, key + " | " + value));
+        } else if (!ids.take(spec, early)) {
+            fields.add(spec);
+        }
     }
 
     private static void flush(StringBuilder para, List<Field> fields) {

@@ -18,9 +18,10 @@ import java.util.List;
  * (docs/decisions/100-label-matching.md).
  *
  * <p>Layout: the root's children in an array indexed by term id (the first step happens at every
- * token, so it is one array read); deeper edges in one open-addressing map keyed by
- * {@code parent << 32 | termId}. Immutable after {@link Builder#build()}, so one trie serves every
- * thread.
+ * token, so it is one array read); below the root, each node's children as one sorted run of term
+ * ids in a flat array (with the child nodes beside them), searched linearly when short and by
+ * halving when long: the children of a node sit together in memory, where a hash map would scatter
+ * the probes of one walk. Immutable after {@link Builder#build()}, so one trie serves every thread.
  */
 final class LabelTrie {
     /**
@@ -30,13 +31,22 @@ final class LabelTrie {
     static final int BREAK = -1;
 
     private final int[] rootChild;
-    private final Long2IntOpenHashMap edges;
+    /** Node k's children are edge slots {@code childFrom[k]} to {@code childFrom[k + 1]} (exclusive). */
+    private final int[] childFrom;
+    /**
+     * Per edge slot, the term id on the edge plus one (so {@link #BREAK} is 0 and sorts first;
+     * ascending within a node) and the node it leads to.
+     */
+    private final int[] edgeToken;
+    private final int[] edgeNode;
     private final int[][] entries;
     private final int maxDepth;
 
-    private LabelTrie(int[] rootChild, Long2IntOpenHashMap edges, int[][] entries, int maxDepth) {
+    private LabelTrie(int[] rootChild, int[] childFrom, int[] edgeToken, int[] edgeNode, int[][] entries, int maxDepth) {
         this.rootChild = rootChild;
-        this.edges = edges;
+        this.childFrom = childFrom;
+        this.edgeToken = edgeToken;
+        this.edgeNode = edgeNode;
         this.entries = entries;
         this.maxDepth = maxDepth;
     }
@@ -58,7 +68,7 @@ final class LabelTrie {
         long best = entries[node] != null ? ((long) (from + 1) << 32) | node : -1;
         int limit = Math.min(to, from + maxDepth);
         for (int j = from + 1; j < limit; j++) {
-            int next = edges.get(((long) node << 32) | (ids[j] & 0xffffffffL));
+            int next = child(node, ids[j]);
             if (next <= 0) {
                 break;
             }
@@ -68,6 +78,24 @@ final class LabelTrie {
             }
         }
         return best;
+    }
+
+    /** The child of a (non-root) node along term id {@code id}, or 0 when there is none. */
+    private int child(int node, int termId) {
+        int id = termId + 1;
+        int lo = childFrom[node];
+        int hi = childFrom[node + 1];
+        if (hi - lo <= 8) {
+            for (int k = lo; k < hi; k++) {
+                int t = edgeToken[k];
+                if (t >= id) {
+                    return t == id ? edgeNode[k] : 0;
+                }
+            }
+            return 0;
+        }
+        int k = Arrays.binarySearch(edgeToken, lo, hi, id);
+        return k >= 0 ? edgeNode[k] : 0;
     }
 
     /** The entries of a node that ends a label. */
@@ -132,18 +160,32 @@ final class LabelTrie {
 
         LabelTrie build() {
             int[] root = new int[maxId + 1];
-            Long2IntOpenHashMap deep = new Long2IntOpenHashMap(edges.size());
-            deep.defaultReturnValue(0);
+            int nodes = entries.size();
+            // the edges below the root sorted by (parent, term id + 1): each node's children become one run
+            long[] deep = new long[edges.size()];
+            int nd = 0;
             for (Long2IntOpenHashMap.Entry e : edges.long2IntEntrySet()) {
                 long key = e.getLongKey();
                 int parent = (int) (key >>> 32);
                 if (parent == 0) {
                     root[(int) key] = e.getIntValue();
                 } else {
-                    deep.put(key, e.getIntValue());
+                    deep[nd++] = ((long) parent << 32) | ((int) key + 1);
                 }
             }
-            deep.trim();
+            deep = Arrays.copyOf(deep, nd);
+            Arrays.sort(deep);
+            int[] childFrom = new int[nodes + 1];
+            int[] edgeToken = new int[nd];
+            int[] edgeNode = new int[nd];
+            for (int k = 0; k < nd; k++) {
+                childFrom[(int) (deep[k] >>> 32) + 1]++;
+                edgeToken[k] = (int) deep[k];
+                edgeNode[k] = edges.get((deep[k] & 0xffffffff00000000L) | (((int) deep[k] - 1) & 0xffffffffL));
+            }
+            for (int k = 0; k < nodes; k++) {
+                childFrom[k + 1] += childFrom[k];
+            }
             int[][] out = new int[entries.size()][];
             for (int i = 0; i < out.length; i++) {
                 IntArrayList e = entries.get(i);
@@ -153,7 +195,7 @@ final class LabelTrie {
                     out[i] = a;
                 }
             }
-            return new LabelTrie(root, deep, out, Math.max(1, maxDepth));
+            return new LabelTrie(root, childFrom, edgeToken, edgeNode, out, Math.max(1, maxDepth));
         }
     }
 }

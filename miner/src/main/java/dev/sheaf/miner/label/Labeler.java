@@ -76,7 +76,15 @@ public final class Labeler {
     private final IntOpenHashSet negationIds = new IntOpenHashSet();
     private final IntOpenHashSet breakerIds = new IntOpenHashSet();
     private final IntOpenHashSet exceptionIds = new IntOpenHashSet();
+    /** Per term id, which of the three sets above it is in ({@link #NEGATION}, {@link #BREAKER}, {@link #EXCEPTION}). */
+    private final byte[] wordRoles;
+    private static final byte NEGATION = 1;
+    private static final byte BREAKER = 2;
+    private static final byte EXCEPTION = 4;
     private final Set<String> negationWords;
+    private final int longestNegationWord;
+    /** The longest of the whole values {@code valueState} compares with ("unknown"). */
+    private static final int LONGEST_FIXED_VALUE = 7;
     private final int nonId;
     private final int freeId;
     private final int lessId;
@@ -103,12 +111,14 @@ public final class Labeler {
             }
         }
         this.negationWords = analysis.profile().negationWords();
+        this.longestNegationWord = negationWords.stream().mapToInt(String::length).max().orElse(0);
         for (String w : options.scopeBreakers()) {
             breakerIds.add(wordId(compileSegmenter, w, "scope breaker"));
         }
         for (String w : options.cueExceptions()) {
             exceptionIds.add(wordId(compileSegmenter, w, "cue exception"));
         }
+        this.wordRoles = wordRoles();
         nonId = wordId(compileSegmenter, "non", "affix");
         freeId = wordId(compileSegmenter, "free", "affix");
         lessId = wordId(compileSegmenter, "less", "affix");
@@ -180,6 +190,8 @@ public final class Labeler {
                     notes.add("facet " + f.id() + " has unit \"" + unit + "\", which Sheaf cannot convert to; its values are read "
                             + "as written (quantities in exactly that unit, or a lone number in a spec value); known units are "
                             + "kg, g, lb, oz, m, cm, mm, in, L, mL, fl oz, gal, °C, °F, mm H2O, FP, lm, h, min, D, person, season");
+                } else {
+                    noteUnitReadOtherwise(f, unit, dim);
                 }
             }
             nfs.add(new NumberFacet(f.id(), f.facet(), dim));
@@ -203,6 +215,43 @@ public final class Labeler {
         this.trie = tb.build();
         this.labelsCompiled = compiled;
         this.workers = ThreadLocal.withInitial(Worker::new);
+    }
+
+    /**
+     * A note when a spec value in the facet's own unit, under one of the facet's labels as key, is
+     * read as another dimension than the unit's: "Waterproof rating: 1000 mm" is a water column
+     * (mm H2O, decision 062), so a waterproof facet in "mm" (a length) could take none of its values.
+     */
+    private void noteUnitReadOtherwise(Concept facet, String unit, Dimension dim) {
+        for (ConceptLabel l : facet.labels()) {
+            java.util.Optional<dev.sheaf.miner.text.Quantity> q = dev.sheaf.miner.text.Quantities.parse(l.text(), "1000 " + unit);
+            if (q.isPresent() && q.get().dimension() != dim) {
+                notes.add("facet " + facet.id() + " has unit \"" + unit + "\", a " + word(dim) + ", but under its label \""
+                        + l.text() + "\" a value such as \"1000 " + unit + "\" is read as a " + word(q.get().dimension())
+                        + " (" + q.get().unit() + "): such values cannot be converted to the facet's unit and are reported "
+                        + "as unreadable; give the facet the unit \"" + q.get().unit() + "\"");
+                return;
+            }
+        }
+    }
+
+    private byte[] wordRoles() {
+        int max = -1;
+        for (IntOpenHashSet set : List.of(negationIds, breakerIds, exceptionIds)) {
+            for (int id : set) {
+                max = Math.max(max, id);
+            }
+        }
+        byte[] roles = new byte[max + 1];
+        negationIds.forEach((int id) -> roles[id] |= NEGATION);
+        breakerIds.forEach((int id) -> roles[id] |= BREAKER);
+        exceptionIds.forEach((int id) -> roles[id] |= EXCEPTION);
+        return roles;
+    }
+
+    /** Whether term id {@code t} (a token, or {@link LabelTrie#BREAK}) has the role. */
+    private boolean is(int t, byte role) {
+        return t >= 0 && t < wordRoles.length && (wordRoles[t] & role) != 0;
     }
 
     /** A labeler with the default options. */
@@ -286,10 +335,14 @@ public final class Labeler {
         return path.toIntArray();
     }
 
-    /** As {@link #applies(FacetProperties, String)} for any of the concept's facets, with the category keys computed once. */
-    private boolean applies(int concept, String category) {
+    /**
+     * As {@link #applies(FacetProperties, String)} for any of the concept's facets, with the concept's
+     * category keys computed once and the listing's category key ({@link #categoryKey}) given, or null
+     * when the listing has no category.
+     */
+    private boolean appliesToKey(int concept, String listingCategoryKey) {
         java.util.Set<String> keys = conceptCategoryKeys[concept];
-        return keys == null || category == null || category.isEmpty() || keys.contains(categoryKey(category));
+        return keys == null || listingCategoryKey == null || keys.contains(listingCategoryKey);
     }
 
     /**
@@ -374,11 +427,16 @@ public final class Labeler {
         private int bn;
         private KeyState keyState;
         private String keyCue;
+        /** The spec field whose value {@link #keyState} describes; read only when a label matches in a key. */
         private int keyStateField;
+        /** The listing's {@link #categoryKey}, or null when it has no category. */
+        private String categoryKey;
 
         Assignments label(Listing l) {
             listing = l;
             keyStateField = -1;
+            String category = l.category();
+            categoryKey = category == null || category.isEmpty() ? null : categoryKey(category);
             matches.clear();
             numbers.clear();
             // one token stream for the whole listing; segments arrive per field and part, in order
@@ -400,7 +458,7 @@ public final class Labeler {
                     numbers.text(fi, f, SegmentPart.TEXT, f.text(), true, l.category());
                 }
             }
-            List<Assignment> out = matches.assignments(l);
+            List<Assignment> out = matches.assignments(l, categoryKey);
             numbers.assignments(l, out);
             out.sort(ASSIGNMENT_ORDER);
             Assignments result = new Assignments(l.id(), l.category(), l.source(), l.locator(), out, numbers.invalid());
@@ -416,6 +474,11 @@ public final class Labeler {
          * like any text; unknown for "-", "n/a", "?".
          */
         private void valueState(String key, String value) {
+            if (plainStatement(value.strip())) {
+                keyCue = null;
+                keyState = KeyState.POSITIVE;
+                return;
+            }
             String v = value.strip().toLowerCase(Locale.ROOT);
             while (!v.isEmpty() && ".!;,".indexOf(v.charAt(v.length() - 1)) >= 0) {
                 v = v.substring(0, v.length() - 1).strip();
@@ -426,9 +489,23 @@ public final class Labeler {
                 keyState = KeyState.UNKNOWN;
                 return;
             }
-            String[] words = v.split("[\\s,;/]+");
-            String rest = v.substring(words[0].length()).strip();
-            boolean denial = negationWords.contains(words[0]) && (words.length == 1 || rest.equals("included")
+            // the first word, up to white space or , ; / (one word alone, or the word before "included",
+            // "available" or the key itself, is a denial); a value of separators only says nothing
+            int cut = 0;
+            while (cut < v.length() && !valueSeparator(v.charAt(cut))) {
+                cut++;
+            }
+            int more = cut;
+            while (more < v.length() && valueSeparator(v.charAt(more))) {
+                more++;
+            }
+            if (cut == 0 && more == v.length()) {
+                keyState = KeyState.UNKNOWN;
+                return;
+            }
+            String first = v.substring(0, cut);
+            String rest = v.substring(cut).strip();
+            boolean denial = cut > 0 && negationWords.contains(first) && (more == v.length() || rest.equals("included")
                     || rest.equals("available") || rest.equals(key.strip().toLowerCase(Locale.ROOT)));
             if (denial || v.equals("false") || v.equals("n") || v.equals("0") || v.equals("\u2717") || v.equals("\u2718")) {
                 keyState = KeyState.NEGATIVE;
@@ -436,6 +513,28 @@ public final class Labeler {
                 return;
             }
             keyState = KeyState.POSITIVE;
+        }
+
+        /**
+         * The common case of {@link #valueState} without lower-casing the value: longer than every
+         * fixed word it is compared with once trailing punctuation and space are dropped (as there),
+         * and its first word is
+         * no negation word (lower case never shortens a text, so a first word longer than every
+         * negation word is none).
+         */
+        private boolean plainStatement(String s) {
+            int end = s.length();
+            while (end > 0 && (".!;,".indexOf(s.charAt(end - 1)) >= 0 || Character.isWhitespace(s.charAt(end - 1)))) {
+                end--;
+            }
+            if (end <= LONGEST_FIXED_VALUE) {
+                return false;
+            }
+            int cut = 0;
+            while (cut < end && !valueSeparator(s.charAt(cut))) {
+                cut++;
+            }
+            return cut > 0 && (cut > longestNegationWord || !negationWords.contains(s.substring(0, cut).toLowerCase(Locale.ROOT)));
         }
 
         /**
@@ -478,10 +577,6 @@ public final class Labeler {
 
         private void match(int fi, SegmentPart part, int[] ids, int[] starts, int[] ends, int n) {
             field = listing.fields().get(fi);
-            if (part == SegmentPart.SPEC_KEY && keyStateField != fi) {
-                valueState(field.key(), field.text());
-                keyStateField = fi;
-            }
             String text = part == SegmentPart.SPEC_KEY ? field.key() : field.text();
             if (matched.length < n) {
                 matched = new boolean[Math.max(n, matched.length * 2)];
@@ -503,6 +598,10 @@ public final class Labeler {
                     String cue;
                     boolean skip = false;
                     if (part == SegmentPart.SPEC_KEY) {
+                        if (keyStateField != fi) {
+                            valueState(field.key(), field.text());
+                            keyStateField = fi;
+                        }
                         skip = keyState == KeyState.UNKNOWN;
                         pol = keyState == KeyState.NEGATIVE ? Polarity.NEGATED : Polarity.STATED;
                         cue = pol == Polarity.NEGATED ? keyCue : null;
@@ -513,8 +612,7 @@ public final class Labeler {
                     if (!skip) {
                         for (int e : entries) {
                             if (e >= 0) {
-                                matches.add(e >>> 2, LabelKind.values()[e & 3], fi, field, part, startChar, endChar,
-                                        text.substring(startChar, endChar), pol, cue);
+                                matches.add(e >>> 2, e & 3, fi, part, startChar, endChar, pol, cue);
                             }
                         }
                     }
@@ -550,17 +648,17 @@ public final class Labeler {
                     continue;
                 }
                 int t = ids[k];
-                if (t == LabelTrie.BREAK || breakerIds.contains(t)) {
+                if (t == LabelTrie.BREAK || is(t, BREAKER)) {
                     return null;
                 }
                 if (t == oId && k > 0 && ids[k - 1] == wId && slash(text, ends[k - 1], starts[k])) {
                     return text.substring(starts[k - 1], ends[k]); // "w/o": without
                 }
-                if (negationIds.contains(t)) {
+                if (is(t, NEGATION)) {
                     if (k + 1 < n && hyphen(text, ends[k], starts[k + 1])) {
                         continue; // "no-see-um", "no-iron": a compound word, not a negation of what follows
                     }
-                    if (k + 1 < i && exceptionIds.contains(ids[k + 1])) {
+                    if (k + 1 < i && is(ids[k + 1], EXCEPTION)) {
                         return null; // "not only waterproof"
                     }
                     return text.substring(starts[k], ends[k]);
@@ -593,6 +691,11 @@ public final class Labeler {
         return to - from == 1 && text.charAt(from) == '/';
     }
 
+    /** What separates the words of a spec value when reading a denial: white space (regex \\s), comma, semicolon, slash. */
+    private static boolean valueSeparator(char c) {
+        return c == ' ' || c == '\t' || c == '\n' || c == '\u000B' || c == '\f' || c == '\r' || c == ',' || c == ';' || c == '/';
+    }
+
     private static boolean hyphen(String text, int from, int to) {
         if (to - from != 1) {
             return false;
@@ -601,63 +704,105 @@ public final class Labeler {
         return c == '-' || c == '\u2010' || c == '\u2011';
     }
 
-    private static final java.util.Comparator<Assignment> ASSIGNMENT_ORDER = java.util.Comparator
-            .comparing(Assignment::conceptId)
-            .thenComparing(a -> a.value() == null ? Double.NEGATIVE_INFINITY : a.value());
+    /** By concept id, then (numbers of one facet) by value; a term, which has no value, first. */
+    private static final java.util.Comparator<Assignment> ASSIGNMENT_ORDER = (a, b) -> {
+        int c = a.conceptId().compareTo(b.conceptId());
+        if (c != 0) {
+            return c;
+        }
+        return Double.compare(a.value() == null ? Double.NEGATIVE_INFINITY : a.value(),
+                b.value() == null ? Double.NEGATIVE_INFINITY : b.value());
+    };
 
-    /** The concept occurrences of one listing, grouped into assignments. */
+    private static final LabelKind[] LABEL_KINDS = LabelKind.values();
+    private static final SegmentPart[] PARTS = SegmentPart.values();
+
+    /**
+     * The concept occurrences of one listing, grouped into assignments. Occurrences are kept as
+     * primitive columns and become {@link Evidence} only when the listing's assignments are built;
+     * they arrive in text order (field, then part, then offset), so sorting them by concept with the
+     * arrival number as tie-break gives each concept its evidence in text order.
+     */
     private final class LabelMatches {
-        private final List<Occurrence> list = new ArrayList<>();
+        private long[] order = new long[64]; // concept << 32 | arrival
+        private int[] fieldOf = new int[64];
+        private int[] startOf = new int[64];
+        private int[] endOf = new int[64];
+        private byte[] partOf = new byte[64];
+        private byte[] kindOf = new byte[64];
+        private String[] cueOf = new String[64]; // null: stated
+        private int n;
 
         void clear() {
-            list.clear();
+            java.util.Arrays.fill(cueOf, 0, n, null);
+            n = 0;
         }
 
-        void add(int concept, LabelKind kind, int fi, Field f, SegmentPart part, int start, int end, String text,
-                 Polarity pol, String cue) {
-            list.add(new Occurrence(concept, new Evidence(fi, f.kind(), f.key(), part, start, end, text, kind, pol, cue)));
+        void add(int concept, int kind, int fi, SegmentPart part, int start, int end, Polarity pol, String cue) {
+            if (n == order.length) {
+                int cap = n * 2;
+                order = java.util.Arrays.copyOf(order, cap);
+                fieldOf = java.util.Arrays.copyOf(fieldOf, cap);
+                startOf = java.util.Arrays.copyOf(startOf, cap);
+                endOf = java.util.Arrays.copyOf(endOf, cap);
+                partOf = java.util.Arrays.copyOf(partOf, cap);
+                kindOf = java.util.Arrays.copyOf(kindOf, cap);
+                cueOf = java.util.Arrays.copyOf(cueOf, cap);
+            }
+            if ((pol == Polarity.NEGATED) != (cue != null)) {
+                throw new IllegalStateException("a negated occurrence needs its cue and a stated one none");
+            }
+            order[n] = ((long) concept << 32) | n;
+            fieldOf[n] = fi;
+            startOf[n] = start;
+            endOf[n] = end;
+            partOf[n] = (byte) part.ordinal();
+            kindOf[n] = (byte) kind;
+            cueOf[n] = cue;
+            n++;
         }
 
-        List<Assignment> assignments(Listing l) {
+        List<Assignment> assignments(Listing l, String listingCategoryKey) {
             List<Assignment> out = new ArrayList<>();
-            if (list.isEmpty()) {
+            if (n == 0) {
                 return out;
             }
-            list.sort(OCCURRENCE_ORDER);
+            java.util.Arrays.sort(order, 0, n);
+            List<Field> fields = l.fields();
             int i = 0;
-            while (i < list.size()) {
-                int c = list.get(i).concept;
+            while (i < n) {
+                int c = (int) (order[i] >>> 32);
                 int j = i;
-                List<Evidence> ev = new ArrayList<>();
-                boolean stated = false;
-                while (j < list.size() && list.get(j).concept == c) {
-                    Evidence e = list.get(j).evidence;
-                    ev.add(e);
-                    stated |= e.polarity() == Polarity.STATED;
+                while (j < n && (int) (order[j] >>> 32) == c) {
                     j++;
                 }
-                out.add(Assignment.term(conceptIds[c], conceptFacet[c], stated ? Polarity.STATED : Polarity.NEGATED, ev,
-                        applies(c, l.category()), conceptReview[c]));
+                boolean stated = false;
+                Evidence[] ev = new Evidence[j - i];
+                for (int k = i; k < j; k++) {
+                    int o = (int) order[k];
+                    Field f = fields.get(fieldOf[o]);
+                    SegmentPart part = PARTS[partOf[o]];
+                    String text = part == SegmentPart.SPEC_KEY ? f.key() : f.text();
+                    String cue = cueOf[o];
+                    Polarity pol = cue == null ? Polarity.STATED : Polarity.NEGATED;
+                    ev[k - i] = new Evidence(fieldOf[o], f.kind(), f.key(), part, startOf[o], endOf[o],
+                            text.substring(startOf[o], endOf[o]), LABEL_KINDS[kindOf[o]], pol, cue);
+                    stated |= cue == null;
+                }
+                out.add(Assignment.term(conceptIds[c], conceptFacet[c], stated ? Polarity.STATED : Polarity.NEGATED,
+                        ev.length == 1 ? List.of(ev[0]) : List.of(ev), appliesToKey(c, listingCategoryKey), conceptReview[c]));
                 i = j;
             }
             return out;
         }
     }
 
-    private record Occurrence(int concept, Evidence evidence) {
-    }
-
-    private static final java.util.Comparator<Occurrence> OCCURRENCE_ORDER = java.util.Comparator
-            .comparingInt(Occurrence::concept)
-            .thenComparingInt(o -> o.evidence().field())
-            .thenComparingInt(o -> o.evidence().part().ordinal())
-            .thenComparingInt(o -> o.evidence().start());
-
     /** Numbers of one listing: spec values of number facets and cued quantities in text. */
     private final class NumberReader {
         private final List<int[]> cues = new ArrayList<>(); // facet, field, part, end char
         private final List<NumberValue> values = new ArrayList<>();
         private final List<InvalidValue> invalid = new ArrayList<>();
+        private final Map<Conversion, Double> conversions = new java.util.HashMap<>();
 
         void clear() {
             cues.clear();
@@ -666,7 +811,7 @@ public final class Labeler {
         }
 
         List<InvalidValue> invalid() {
-            return new ArrayList<>(invalid);
+            return invalid.isEmpty() ? List.of() : List.copyOf(invalid);
         }
 
         void cue(int facet, int fi, SegmentPart part, int endChar) {
@@ -768,8 +913,9 @@ public final class Labeler {
          * inside the value links it, never the dimension alone.
          */
         void text(int fi, Field f, SegmentPart part, String text, boolean byDimension, String category) {
-            if (numberFacets.length == 0 || !hasDigit(text)) {
-                return;
+            if (numberFacets.length == 0 || !hasDigit(text)
+                    || !(byDimension && options.quantityByDimension() && !dimensionFacets.isEmpty()) && !hasCue(fi, part)) {
+                return; // no quantity here could go to a facet: neither a cue before it nor its dimension alone
             }
             for (dev.sheaf.miner.text.Quantity q : dev.sheaf.miner.text.Quantities.find(text)) {
                 int nf = cuedFacet(fi, part, text, q);
@@ -800,6 +946,15 @@ public final class Labeler {
                 }
             }
             return found;
+        }
+
+        private boolean hasCue(int fi, SegmentPart part) {
+            for (int[] c : cues) {
+                if (c[1] == fi && c[2] == part.ordinal()) {
+                    return true;
+                }
+            }
+            return false;
         }
 
         private int cuedFacet(int fi, SegmentPart part, String text, dev.sheaf.miner.text.Quantity q) {
@@ -858,8 +1013,8 @@ public final class Labeler {
                     }
                     return;
                 }
-                v = Units.convert(value, u, target);
-                vmax = Units.convert(valueMax, u, target);
+                v = convert(value, u, target);
+                vmax = valueMax == value ? v : convert(valueMax, u, target);
                 u = target;
             } else if (target != null) {
                 u = target;
@@ -871,6 +1026,21 @@ public final class Labeler {
                 }
             }
             values.add(new NumberValue(nf, v, vmax, u, ev));
+        }
+
+        /** {@link Units#convert}, remembered: a catalog repeats the same few values and units. */
+        private double convert(double value, String from, String to) {
+            Conversion key = new Conversion(value, from, to);
+            Double hit = conversions.get(key);
+            if (hit != null) {
+                return hit;
+            }
+            double v = Units.convert(value, from, to);
+            if (conversions.size() >= CONVERSION_CACHE) {
+                conversions.clear();
+            }
+            conversions.put(key, v);
+            return v;
         }
 
         private boolean same(double a, double b) {
@@ -916,6 +1086,12 @@ public final class Labeler {
     }
 
     private static final int[] NO_FACETS = new int[0];
+
+    /** Conversions a worker remembers before it starts afresh. */
+    private static final int CONVERSION_CACHE = 4096;
+
+    private record Conversion(double value, String from, String to) {
+    }
 
     /** A number in running text: digits with optional thousands commas and a decimal part. */
     private static final java.util.regex.Pattern NUMBER_IN_TEXT = java.util.regex.Pattern.compile(

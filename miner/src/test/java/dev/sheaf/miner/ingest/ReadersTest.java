@@ -232,6 +232,88 @@ class ReadersTest {
     }
 
     @Test
+    void markdownPipeTablesAreSpecTablesWithTheirValuesAndOffsetsAsWritten(@TempDir Path dir) throws IOException {
+        String md = String.join("\n",
+                "# Tarn 2P Tent",                        // line 1
+                "",
+                "A light tent.",                          // 3
+                "",
+                "| Spec | Value |",                        // 5
+                "|:-----|------:|",
+                "| SKU | FH-T-900 |",
+                "| Weight | 1.2 kg |",                     // 8
+                "| **Packed size** | 45 x 15 cm |",
+                "| Fly \\| floor | 20D \\| 30D nylon |",   // 10: an escaped pipe is text, and no key holds one
+                "| Poles | DAC | 8.7 mm |",               // 11: three cells under two
+                "",
+                "Floor area | Peak height | Doors",         // 13: outer pipes are optional
+                "--- | :---: | ---",
+                "2.9 m² | 105 cm | 2",                    // 15: one row under a header of three: sideways
+                "after the table");
+        Path f = dir.resolve("tarn.md");
+        Files.writeString(f, md, java.nio.charset.StandardCharsets.UTF_8);
+        Fixtures.Result r = read(f);
+        Listing l = r.only();
+        assertEquals("FH-T-900", l.id(), "an identifier row names the listing and is no spec");
+        assertEquals("Tarn 2P Tent", l.title());
+        assertEquals(List.of("Weight", "Packed size", "Poles", "Floor area", "Peak height", "Doors"), specKeys(l));
+        assertEquals("1.2 kg", spec(l, "Weight"));
+        assertEquals("45 x 15 cm", spec(l, "Packed size"), "emphasis dropped");
+        assertEquals("DAC, 8.7 mm", spec(l, "Poles"), "the cells after the key, as HTML rows with several values");
+        assertEquals("2.9 m²", spec(l, "Floor area"));
+        assertEquals("105 cm", spec(l, "Peak height"));
+        assertEquals("2", spec(l, "Doors"));
+        assertEquals(List.of("Spec | Value"), texts(l, FieldKind.HEADING), "the header row of a key/value table");
+        assertEquals(List.of("A light tent.", "Fly | floor | 20D | 30D nylon", "after the table"), texts(l, FieldKind.TEXT));
+        assertEquals(1, r.problems().size(), r.problems().toString());
+        assertEquals("line 11", r.problems().get(0).position());
+        assertEquals("parse", r.problems().get(0).kind());
+        assertTrue(r.problems().get(0).reason().contains("3 cells under a header of 2"), r.problems().get(0).reason());
+
+        // offsets of what the labeler finds are into the cell text as read: the value, the key, the row's text
+        dev.sheaf.vocab.Vocabulary v = dev.sheaf.vocab.Vocabulary.of(dev.sheaf.vocab.SchemeInfo.of("t", "t"), List.of(
+                dev.sheaf.vocab.Concept.builder("weight").prefLabel("weight")
+                        .facet(dev.sheaf.vocab.FacetProperties.number("kg", List.of())).build(),
+                dev.sheaf.vocab.Concept.builder("nylon").prefLabel("nylon").build(),
+                dev.sheaf.vocab.Concept.builder("packed-size").prefLabel("packed size").build()), List.of(), List.of());
+        dev.sheaf.miner.label.Assignments a = dev.sheaf.miner.label.Labeler.of(v,
+                dev.sheaf.miner.text.Analysis.of(dev.sheaf.miner.text.AnalysisProfile.defaults())).label(l);
+        java.util.Map<String, dev.sheaf.miner.label.Evidence> ev = new java.util.TreeMap<>();
+        a.assignments().forEach(x -> ev.put(x.conceptId(), x.evidence().get(0)));
+        assertEquals(List.of("nylon", "packed-size", "weight"), List.copyOf(ev.keySet()), a.toString());
+        assertEquals(List.of(dev.sheaf.miner.text.SegmentPart.SPEC_VALUE, 0, 6, "1.2 kg"),
+                List.of(ev.get("weight").part(), ev.get("weight").start(), ev.get("weight").end(), ev.get("weight").text()));
+        assertEquals(List.of(dev.sheaf.miner.text.SegmentPart.SPEC_KEY, 0, 11, "Packed size"),
+                List.of(ev.get("packed-size").part(), ev.get("packed-size").start(), ev.get("packed-size").end(), ev.get("packed-size").text()));
+        assertEquals(List.of(dev.sheaf.miner.text.SegmentPart.TEXT, 24, 29, "nylon"),
+                List.of(ev.get("nylon").part(), ev.get("nylon").start(), ev.get("nylon").end(), ev.get("nylon").text()));
+    }
+
+    @Test
+    void aMarkdownTableWhoseDelimiterRowDoesNotFitItsHeaderIsTextWithAProblem(@TempDir Path dir) throws IOException {
+        Path f = dir.resolve("broken.md");
+        Files.writeString(f, "# Cairn Stove\n\n| Output | 3,100 W |\n|---|---|---|\n| Fuel | isobutane |\n\nSimmer control.\n",
+                java.nio.charset.StandardCharsets.UTF_8);
+        Fixtures.Result r = read(f);
+        Listing l = r.only();
+        assertEquals("Cairn Stove", l.title(), "the batch goes on: the listing is read");
+        assertEquals(List.of(), specKeys(l), "no table, so no spec rows");
+        assertEquals(List.of("| Output | 3,100 W |", "| Fuel | isobutane |", "Simmer control."), texts(l, FieldKind.TEXT),
+                "as before tables were read: the delimiter row parts paragraphs");
+        assertEquals(1, r.problems().size(), r.problems().toString());
+        assertEquals("line 4", r.problems().get(0).position());
+        assertEquals("parse", r.problems().get(0).kind());
+        assertTrue(r.problems().get(0).reason().contains("delimiter row has 3 cells but its header row 2"), r.problems().get(0).reason());
+        assertTrue(r.problems().get(0).source().endsWith("broken.md"), r.problems().get(0).source());
+
+        // a line with a pipe but no delimiter row under it is no table at all, and no problem
+        Files.writeString(f, "# Cairn Stove\n\nFuel | isobutane\nOutput: 3,100 W\n", java.nio.charset.StandardCharsets.UTF_8);
+        Fixtures.Result plain = read(f);
+        assertEquals(List.of(), plain.problems());
+        assertEquals(List.of("Output"), specKeys(plain.only()));
+    }
+
+    @Test
     void rtfIsReadThroughTikaWithItsCodePage() {
         Listing l = read(fixture("rtf/wool-socks.rtf")).only();
         assertEquals("Wool Hiking Socks", l.title());

@@ -199,6 +199,39 @@ class LabelerTest {
     }
 
     @Test
+    void aSpecValueOfSeparatorsOnlySaysNothingAboutItsKey() {
+        // it used to stop the labeler (the value split into no words at all)
+        assertEquals(Map.of(), concepts(listing("FH-4", "jackets", Field.spec("Hood", "/"))));
+        assertEquals(Map.of(), concepts(listing("FH-4", "jackets", Field.spec("Hood", " , ; "))));
+        // a long value that starts with a separator is a statement; one starting with a negation word is read as before
+        assertEquals(Map.of("hooded", "stated"), concepts(listing("FH-4", "jackets", Field.spec("Hood", "/ detachable, stows in collar"))));
+        assertEquals(Map.of("hooded", "negated"), concepts(listing("FH-4", "jackets", Field.spec("Hood", "NONE, ;"))));
+        assertEquals(Map.of("hooded", "negated"), concepts(listing("FH-4", "jackets", Field.spec("Hood", "without hood"))));
+        assertEquals(Map.of("hooded", "stated"), concepts(listing("FH-4", "jackets", Field.spec("Hood", "Unknown colour"))));
+        assertEquals(Map.of(), concepts(listing("FH-4", "jackets", Field.spec("Hood", "Unknown."))));
+    }
+
+    @Test
+    void aWordThatStartsManyLabelsFindsEachOfThemAndTheLongest() {
+        // more than eight labels continue "pack" (the trie searches a long run of children by halving)
+        List<Concept> cs = new ArrayList<>();
+        String[] next = {"cover", "liner", "strap", "frame", "lid", "pocket", "zip", "belt", "harness", "sack", "weight", "volume"};
+        for (String w : next) {
+            cs.add(Concept.builder("pack-" + w).prefLabel("pack " + w).build());
+        }
+        cs.add(Concept.builder("pack").prefLabel("pack").build());
+        cs.add(Concept.builder("pack-lid-pocket").prefLabel("pack lid pocket").build());
+        Labeler l = Labeler.of(Vocabulary.of(SchemeInfo.of("t", "t"), cs, List.of(), List.of()), Analysis.of(AnalysisProfile.defaults()));
+        for (String w : next) {
+            assertEquals(List.of("pack-" + w), ids(l, "Pack " + w), w);
+        }
+        assertEquals(List.of("pack"), ids(l, "pack bag"));
+        assertEquals(List.of("pack"), ids(l, "pack. cover"), "a break in the text is no edge of the trie");
+        assertEquals(List.of("pack-lid-pocket"), ids(l, "pack lid pocket"));
+        assertEquals(List.of("pack", "pack-lid"), ids(l, "pack lid, pack"));
+    }
+
+    @Test
     void yesNoFacetsAreAssignedThroughTheirOwnLabels() {
         assertEquals(Map.of("packable", "stated"), concepts("jackets", "Packs into its own pocket"));
         assertEquals(Map.of("packable", "negated"), concepts("jackets", "Not packable"));
@@ -294,6 +327,39 @@ class LabelerTest {
         assertEquals(1, l.notes().size(), l.notes().toString());
         assertTrue(l.notes().get(0).contains("\"...\""));
         assertEquals(1, l.labelsCompiled());
+    }
+
+    @Test
+    void aWaterproofRatingIsAWaterColumnNotALength() {
+        // the quantity reader takes "20,000 mm" under a waterproof key as mm H2O (decision 062); a facet in
+        // plain "mm" (a length) can take none of those values, and says so when compiled
+        java.util.function.Function<String, Labeler> withUnit = unit -> Labeler.of(Vocabulary.of(SchemeInfo.of("t", "t"), List.of(
+                Concept.builder("waterproof-rating").prefLabel("Waterproof rating").altLabel("hydrostatic head")
+                        .facet(dev.sheaf.vocab.FacetProperties.number(unit, List.of(new dev.sheaf.vocab.Bucket("10,000 mm and up", 10000.0, null))))
+                        .build(),
+                Concept.builder("pole-diameter").prefLabel("Pole diameter")
+                        .facet(dev.sheaf.vocab.FacetProperties.number("mm", List.of())).build()), List.of(), List.of()),
+                Analysis.of(AnalysisProfile.defaults()));
+        Listing l = listing("T", "tents", Field.spec("Waterproof rating", "20,000 mm"), Field.spec("Pole diameter", "8.5 mm"),
+                Field.of(FieldKind.BULLET, "Fly with a 3,000mm hydrostatic head"));
+
+        Labeler mm = withUnit.apply("mm");
+        assertEquals(1, mm.notes().size(), mm.notes().toString());
+        assertTrue(mm.notes().get(0).contains("waterproof-rating") && mm.notes().get(0).contains("\"mm H2O\""), mm.notes().get(0));
+        Assignments wrong = mm.label(l);
+        assertEquals(1, wrong.invalid().size(), wrong.toString());
+        assertTrue(wrong.invalid().get(0).reason().contains("water column"), wrong.invalid().get(0).reason());
+
+        Labeler water = withUnit.apply("mm H2O");
+        assertEquals(List.of(), water.notes());
+        Assignments right = water.label(l);
+        assertEquals(List.of(), right.invalid());
+        List<Assignment> ratings = right.assignments().stream().filter(a -> a.conceptId().equals("waterproof-rating")).toList();
+        assertEquals(List.of(3000.0, 20000.0), ratings.stream().map(Assignment::value).toList());
+        assertEquals("mm H2O", ratings.get(1).unit());
+        assertEquals("10,000 mm and up", ratings.get(1).bucket());
+        assertEquals("3,000mm", ratings.get(0).evidence().get(0).text());
+        assertEquals(8.5, right.assignments().stream().filter(a -> a.conceptId().equals("pole-diameter")).findFirst().orElseThrow().value());
     }
 
     @Test
