@@ -44,10 +44,16 @@ public final class CuratorApp extends Application {
      */
     public static void installPanels(MainView view, MainViewModel vm) {
         dev.sheaf.curator.hierarchy.StructurePanels p = new dev.sheaf.curator.hierarchy.StructurePanels(vm.sessionProperty());
-        javafx.scene.control.SplitPane centre = new javafx.scene.control.SplitPane(
-                new dev.sheaf.curator.concepts.ConceptListView(vm.sessionProperty()).node(), p.hierarchy());
-        centre.setOrientation(javafx.geometry.Orientation.VERTICAL);
-        centre.setDividerPositions(0.2);
+        // the concept finder sits above the tree and opens its matches only while something is typed
+        dev.sheaf.curator.concepts.ConceptListView finder = dev.sheaf.curator.concepts.ConceptListView.finder(vm.sessionProperty());
+        javafx.scene.layout.BorderPane centre = new javafx.scene.layout.BorderPane(p.hierarchy());
+        centre.setTop(finder.node());
+        finder.setOnChosen(() -> {
+            javafx.scene.Node tree = centre.lookup("#hierarchy-tree");
+            if (tree != null) {
+                tree.requestFocus();
+            }
+        });
         view.setHierarchyView(centre);
         view.addSidePanel("Facet", p.facet());
         view.addSidePanel("Suggestions", p.suggestions());

@@ -61,7 +61,7 @@ public final class HarvestView {
 
     public void focusTable() {
         table.requestFocus();
-        if (table.getSelectionModel().isEmpty() && !table.getItems().isEmpty()) {
+        if (table.getSelectionModel().getSelectedItem() == null && !table.getItems().isEmpty()) {
             table.getSelectionModel().select(0);
             table.getFocusModel().focus(0);
         }

@@ -1,15 +1,18 @@
 package dev.sheaf.curator.suggestions;
 
 import dev.sheaf.curator.hierarchy.HierarchyView;
+import dev.sheaf.curator.suggestions.SuggestionsViewModel.ParentRow;
 import dev.sheaf.curator.suggestions.SuggestionsViewModel.Row;
 import java.util.Objects;
 import javafx.geometry.Insets;
+import javafx.geometry.Orientation;
 import javafx.geometry.Pos;
 import javafx.scene.control.Button;
 import javafx.scene.control.ChoiceBox;
 import javafx.scene.control.Label;
 import javafx.scene.control.ListCell;
 import javafx.scene.control.ListView;
+import javafx.scene.control.SplitPane;
 import javafx.scene.control.Tooltip;
 import javafx.scene.input.KeyCode;
 import javafx.scene.layout.BorderPane;
@@ -26,6 +29,7 @@ import javafx.scene.layout.VBox;
 public final class SuggestionsView extends BorderPane {
     static final String KEYS = "Enter or M merge · 1–9 pick the preferred label · A keep apart · D dismiss";
     private final ListView<Row> list = new ListView<>();
+    private final ListView<ParentRow> parents = new ListView<>();
 
     public SuggestionsView(SuggestionsViewModel vm) {
         Objects.requireNonNull(vm);
@@ -40,7 +44,6 @@ public final class SuggestionsView extends BorderPane {
         BorderPane head = new BorderPane(scope);
         BorderPane.setAlignment(scope, Pos.CENTER_LEFT);
         head.setPadding(new Insets(4, 6, 4, 6));
-        setTop(head);
 
         list.setId("suggestions-list");
         list.setItems(vm.rows());
@@ -77,7 +80,6 @@ public final class SuggestionsView extends BorderPane {
                 e.consume();
             }
         });
-        setCenter(list);
 
         ChoiceBox<String> pref = new ChoiceBox<>(vm.preferredChoices());
         pref.setId("suggestions-preferred");
@@ -111,9 +113,103 @@ public final class SuggestionsView extends BorderPane {
         Label hint = new Label(KEYS);
         hint.getStyleClass().add("key-hint");
         hint.setWrapText(true);
-        VBox bottom = new VBox(6, prefRow, buttons, message, hint);
+        VBox answers = new VBox(6, prefRow, buttons);
+        answers.setPadding(new Insets(6));
+        BorderPane merges = new BorderPane(list, head, null, answers, null);
+        VBox bottom = new VBox(4, message, hint);
         bottom.setPadding(new Insets(6));
+        SplitPane split = new SplitPane(merges, parentsPane(vm));
+        split.setOrientation(Orientation.VERTICAL);
+        split.setDividerPositions(0.62);
+        setTop(null);
+        setCenter(split);
         setBottom(bottom);
+    }
+
+    /** The parent suggestions: "zipper ⊃ two way zipper"; Enter moves the child under the parent, Shift+Enter puts it also there. */
+    private Region parentsPane(SuggestionsViewModel vm) {
+        Label scope = new Label();
+        scope.setId("parents-scope");
+        scope.getStyleClass().add("panel-title");
+        scope.textProperty().bind(vm.parentScopeProperty());
+        scope.setWrapText(true);
+        parents.setId("parents-list");
+        parents.setItems(vm.parents());
+        parents.setPlaceholder(new Label("No parent suggestions here"));
+        parents.setCellFactory(l -> new ParentCell());
+        parents.getSelectionModel().selectedItemProperty().addListener((o, a, b) -> {
+            if (b != null && b != vm.selectedParentProperty().get()) {
+                vm.selectedParentProperty().set(b);
+            }
+        });
+        vm.selectedParentProperty().addListener((o, a, b) -> {
+            if (b != null && parents.getSelectionModel().getSelectedItem() != b) {
+                parents.getSelectionModel().select(b);
+            }
+        });
+        parents.setOnKeyPressed(e -> {
+            if (e.getCode() == KeyCode.ENTER && !e.isShortcutDown() && !e.isAltDown()) {
+                vm.putUnder(e.isShiftDown());
+                e.consume();
+            }
+        });
+        Button under = new Button("Put under");
+        under.setId("parents-put-under");
+        under.setTooltip(new Tooltip("Move the child under the parent (Enter)"));
+        under.setOnAction(e -> vm.putUnder(false));
+        Button also = new Button("Also under");
+        also.setTooltip(new Tooltip("Keep the child where it is and put it under the parent as well (Shift+Enter)"));
+        also.setOnAction(e -> vm.putUnder(true));
+        for (Button b : new Button[] {under, also}) {
+            b.disableProperty().bind(vm.selectedParentProperty().isNull());
+            b.setFocusTraversable(false);
+        }
+        Label keys = new Label("Enter put under · Shift+Enter also under");
+        keys.getStyleClass().add("key-hint");
+        HBox row = new HBox(6, under, also, keys);
+        row.setAlignment(Pos.CENTER_LEFT);
+        row.setPadding(new Insets(6));
+        BorderPane head = new BorderPane(scope);
+        BorderPane.setAlignment(scope, Pos.CENTER_LEFT);
+        head.setPadding(new Insets(4, 6, 4, 6));
+        return new BorderPane(parents, head, null, row, null);
+    }
+
+    public ListView<ParentRow> parentList() {
+        return parents;
+    }
+
+    /** Parent ⊃ child in bold, then the score, kind and state, then the reason. */
+    private static final class ParentCell extends ListCell<ParentRow> {
+        private final Label text = new Label();
+        private final Label meta = new Label();
+        private final Label reason = new Label();
+        private final VBox box = new VBox(2, text, meta, reason);
+
+        ParentCell() {
+            text.setStyle("-fx-font-weight: bold;");
+            meta.getStyleClass().add("score");
+            reason.getStyleClass().add("reason");
+            reason.setWrapText(true);
+            box.setMinWidth(0);
+            setPrefWidth(0);
+        }
+
+        @Override
+        protected void updateItem(ParentRow r, boolean empty) {
+            super.updateItem(r, empty);
+            if (empty || r == null) {
+                setGraphic(null);
+                setText(null);
+                return;
+            }
+            text.setText(r.text());
+            meta.setText(r.meta());
+            reason.setText(r.reason());
+            reason.maxWidthProperty().bind(widthProperty().subtract(24));
+            setText(null);
+            setGraphic(box);
+        }
     }
 
     public ListView<Row> list() {
