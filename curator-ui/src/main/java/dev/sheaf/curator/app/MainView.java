@@ -75,7 +75,7 @@ public final class MainView {
         right.setOrientation(Orientation.VERTICAL);
         right.setDividerPositions(0.36);
         SplitPane main = new SplitPane(harvestView.node(), centre, right);
-        main.setDividerPositions(0.42, 0.68);
+        main.setDividerPositions(0.41, 0.69);
         main.getStyleClass().add("main-split");
         root.setTop(menus());
         root.setCenter(new StackPane(main, startScreen()));

@@ -113,14 +113,14 @@ public final class SuggestionsView extends BorderPane {
         Label hint = new Label(KEYS);
         hint.getStyleClass().add("key-hint");
         hint.setWrapText(true);
-        VBox answers = new VBox(6, prefRow, buttons);
+        VBox answers = new VBox(6, prefRow, buttons, hint);
         answers.setPadding(new Insets(6));
         BorderPane merges = new BorderPane(list, head, null, answers, null);
-        VBox bottom = new VBox(4, message, hint);
+        VBox bottom = new VBox(4, message);
         bottom.setPadding(new Insets(6));
         SplitPane split = new SplitPane(merges, parentsPane(vm));
         split.setOrientation(Orientation.VERTICAL);
-        split.setDividerPositions(0.62);
+        split.setDividerPositions(0.5);
         setTop(null);
         setCenter(split);
         setBottom(bottom);
@@ -166,8 +166,11 @@ public final class SuggestionsView extends BorderPane {
         }
         Label keys = new Label("Enter put under · Shift+Enter also under");
         keys.getStyleClass().add("key-hint");
-        HBox row = new HBox(6, under, also, keys);
-        row.setAlignment(Pos.CENTER_LEFT);
+        keys.setWrapText(true);
+        under.setMinWidth(Region.USE_PREF_SIZE);
+        also.setMinWidth(Region.USE_PREF_SIZE);
+        HBox buttons = new HBox(6, under, also);
+        VBox row = new VBox(6, buttons, keys);
         row.setPadding(new Insets(6));
         BorderPane head = new BorderPane(scope);
         BorderPane.setAlignment(scope, Pos.CENTER_LEFT);
@@ -189,6 +192,7 @@ public final class SuggestionsView extends BorderPane {
         ParentCell() {
             text.setStyle("-fx-font-weight: bold;");
             meta.getStyleClass().add("score");
+            meta.setWrapText(true);
             reason.getStyleClass().add("reason");
             reason.setWrapText(true);
             box.setMinWidth(0);
@@ -245,6 +249,7 @@ public final class SuggestionsView extends BorderPane {
             meta.setText("score " + r.score() + " · " + r.kinds());
             reason.setText(r.reason());
             reason.maxWidthProperty().bind(widthProperty().subtract(24));
+            meta.maxWidthProperty().bind(widthProperty().subtract(24));
             setText(null);
             setGraphic(box);
         }

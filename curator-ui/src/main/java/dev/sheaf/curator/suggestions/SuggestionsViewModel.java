@@ -212,8 +212,8 @@ public final class SuggestionsViewModel {
         String child = h.child().conceptId() != null && v.contains(h.child().conceptId()) ? v.displayLabel(h.child().conceptId())
                 : h.child().shown();
         boolean ready = h.parent().conceptId() != null && v.contains(h.parent().conceptId());
-        String state = ready ? (h.child().conceptId() != null ? "both are concepts" : "the child is a new term")
-                : h.parent().facet() ? "make the facet first" : "keep the parent first";
+        String state = ready ? (h.child().conceptId() != null ? "both concepts" : "new term")
+                : h.parent().facet() ? "facet not made yet" : "parent not kept yet";
         return new ParentRow(h, parent + " ⊃ " + child, String.format(Locale.ROOT, "score %.2f · %s · %s", h.score(), h.kind().word(), state),
                 h.reason());
     }
