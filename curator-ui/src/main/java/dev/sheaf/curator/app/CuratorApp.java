@@ -25,6 +25,32 @@ public final class CuratorApp extends Application {
         if (!args.isEmpty()) {
             vm.open(Path.of(args.get(0)));
         }
+        screenshotWhenReady(stage, vm);
+    }
+
+    /**
+     * With {@code -Dsheaf.curator.screenshot=FILE.png}: once the window is idle (workspace open or
+     * none given, no background work), saves a picture of it there, so the real desktop can be seen
+     * as a user sees it on a machine without a screen grabber (e.g. under xvfb-run).
+     */
+    private static void screenshotWhenReady(Stage stage, MainViewModel vm) {
+        String file = System.getProperty("sheaf.curator.screenshot");
+        if (file == null || file.isBlank()) {
+            return;
+        }
+        javafx.animation.Timeline poll = new javafx.animation.Timeline();
+        poll.getKeyFrames().add(new javafx.animation.KeyFrame(javafx.util.Duration.seconds(2), e -> {
+            if (!vm.background().runningProperty().get()) {
+                poll.stop();
+                try {
+                    System.err.println("sheaf curate: window picture saved to " + Screenshots.saveTo(stage.getScene(), Path.of(file)));
+                } catch (java.io.IOException ex) {
+                    System.err.println("sheaf curate: cannot save the window picture to " + file + ": " + ex.getMessage());
+                }
+            }
+        }));
+        poll.setCycleCount(javafx.animation.Animation.INDEFINITE);
+        poll.play();
     }
 
     /** The view-model with a background worker and an evidence-query worker, reporting on the JavaFX thread. */

@@ -321,12 +321,23 @@ public final class MainView {
         screen.getStyleClass().add("start-screen");
         var showing = vm.sessionProperty().isNull().and(vm.background().runningProperty().not());
         screen.visibleProperty().bind(showing);
+        // the first recent workspace is picked and focused whenever the screen shows (Enter opens it), else the open button
+        Runnable focusStart = () -> {
+            if (recent.getItems().isEmpty()) {
+                open.requestFocus();
+            } else {
+                recent.requestFocus();
+                recent.getSelectionModel().select(0);
+            }
+        };
         showing.addListener((o, a, b) -> {
             if (b) {
-                javafx.application.Platform.runLater(recent.getItems().isEmpty() ? open::requestFocus : () -> {
-                    recent.requestFocus();
-                    recent.getSelectionModel().select(0);
-                });
+                javafx.application.Platform.runLater(focusStart);
+            }
+        });
+        screen.sceneProperty().addListener((o, a, b) -> {
+            if (b != null && showing.get()) {
+                javafx.application.Platform.runLater(focusStart);
             }
         });
         return screen;

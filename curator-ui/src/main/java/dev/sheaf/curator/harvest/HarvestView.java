@@ -120,7 +120,7 @@ public final class HarvestView {
             }
         });
         category.valueProperty().bindBidirectional(vm.categoryProperty());
-        category.setPrefWidth(150);
+        category.setPrefWidth(130);
         TextField minScore = number("min score", vm.minScoreProperty().get());
         minScore.setId("harvest-min-score");
         minScore.textProperty().bindBidirectional(vm.minScoreProperty());
@@ -130,6 +130,7 @@ public final class HarvestView {
         Button clear = new Button("Clear");
         clear.setTooltip(new Tooltip("Clear the filters (the decision filter stays)"));
         clear.setOnAction(e -> vm.clearFilters());
+        clear.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
         HBox row2 = new HBox(8, words, category, minScore, minCount, clear);
         row2.setAlignment(Pos.CENTER_LEFT);
         VBox box = new VBox(6, row1, row2);

@@ -1,5 +1,7 @@
 package dev.sheaf.curator.ui;
 
+import dev.sheaf.curator.app.Screenshots;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;

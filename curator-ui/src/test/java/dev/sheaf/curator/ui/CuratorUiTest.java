@@ -1,5 +1,7 @@
 package dev.sheaf.curator.ui;
 
+import dev.sheaf.curator.app.Screenshots;
+
 import dev.sheaf.curator.session.Caution;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;

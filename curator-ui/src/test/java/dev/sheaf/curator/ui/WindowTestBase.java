@@ -1,5 +1,7 @@
 package dev.sheaf.curator.ui;
 
+import dev.sheaf.curator.app.Screenshots;
+
 import dev.sheaf.curator.app.CuratorApp;
 import dev.sheaf.curator.app.MainView;
 import dev.sheaf.curator.app.MainViewModel;
