@@ -45,20 +45,8 @@ public final class SuggestionsView extends BorderPane {
         BorderPane.setAlignment(scope, Pos.CENTER_LEFT);
         head.setPadding(new Insets(4, 6, 4, 6));
 
-        list.setId("suggestions-list");
-        list.setItems(vm.rows());
-        list.setPlaceholder(new Label("No merge suggestions here"));
-        list.setCellFactory(l -> new SuggestionCell());
-        list.getSelectionModel().selectedItemProperty().addListener((o, a, b) -> {
-            if (b != null && b != vm.selectedProperty().get()) {
-                vm.selectedProperty().set(b);
-            }
-        });
-        vm.selectedProperty().addListener((o, a, b) -> {
-            if (b != null && list.getSelectionModel().getSelectedItem() != b) {
-                list.getSelectionModel().select(b);
-            }
-        });
+        follow(list, "suggestions-list", vm.rows(), vm.selectedProperty(), "No merge suggestions here",
+                r -> new String[] {r.members(), "score " + r.score() + " · " + r.kinds(), r.reason()});
         list.setOnKeyPressed(e -> {
             KeyCode k = e.getCode();
             if (e.isShortcutDown() || e.isAltDown()) {
@@ -133,20 +121,8 @@ public final class SuggestionsView extends BorderPane {
         scope.getStyleClass().add("panel-title");
         scope.textProperty().bind(vm.parentScopeProperty());
         scope.setWrapText(true);
-        parents.setId("parents-list");
-        parents.setItems(vm.parents());
-        parents.setPlaceholder(new Label("No parent suggestions here"));
-        parents.setCellFactory(l -> new ParentCell());
-        parents.getSelectionModel().selectedItemProperty().addListener((o, a, b) -> {
-            if (b != null && b != vm.selectedParentProperty().get()) {
-                vm.selectedParentProperty().set(b);
-            }
-        });
-        vm.selectedParentProperty().addListener((o, a, b) -> {
-            if (b != null && parents.getSelectionModel().getSelectedItem() != b) {
-                parents.getSelectionModel().select(b);
-            }
-        });
+        follow(parents, "parents-list", vm.parents(), vm.selectedParentProperty(), "No parent suggestions here",
+                r -> new String[] {r.text(), r.meta(), r.reason()});
         parents.setOnKeyPressed(e -> {
             if (e.getCode() == KeyCode.ENTER && !e.isShortcutDown() && !e.isAltDown()) {
                 vm.putUnder(e.isShiftDown());
@@ -182,75 +158,59 @@ public final class SuggestionsView extends BorderPane {
         return parents;
     }
 
-    /** Parent ⊃ child in bold, then the score, kind and state, then the reason. */
-    private static final class ParentCell extends ListCell<ParentRow> {
-        private final Label text = new Label();
+    /** Fills {@code l} from {@code rows} and keeps its selection and the view-model's {@code selected} the same, both ways. */
+    private static <T> void follow(ListView<T> l, String id, javafx.collections.ObservableList<T> rows,
+                                   javafx.beans.property.ObjectProperty<T> selected, String none,
+                                   java.util.function.Function<T, String[]> lines) {
+        l.setId(id);
+        l.setItems(rows);
+        l.setPlaceholder(new Label(none));
+        l.setCellFactory(x -> new ThreeLineCell<>(lines));
+        l.getSelectionModel().selectedItemProperty().addListener((o, a, b) -> {
+            if (b != null && b != selected.get()) {
+                selected.set(b);
+            }
+        });
+        selected.addListener((o, a, b) -> {
+            if (b != null && l.getSelectionModel().getSelectedItem() != b) {
+                l.getSelectionModel().select(b);
+            }
+        });
+    }
+
+    /** A suggestion as three lines: what (bold), the score line, the reason (both wrapped to the cell). */
+    private static final class ThreeLineCell<T> extends ListCell<T> {
+        private final java.util.function.Function<T, String[]> lines;
+        private final Label what = new Label();
         private final Label meta = new Label();
         private final Label reason = new Label();
-        private final VBox box = new VBox(2, text, meta, reason);
+        private final VBox box = new VBox(2, what, meta, reason);
 
-        ParentCell() {
-            text.setStyle("-fx-font-weight: bold;");
+        ThreeLineCell(java.util.function.Function<T, String[]> lines) {
+            this.lines = lines;
+            what.setStyle("-fx-font-weight: bold;");
             meta.getStyleClass().add("score");
             meta.setWrapText(true);
             reason.getStyleClass().add("reason");
             reason.setWrapText(true);
             box.setMinWidth(0);
-            setPrefWidth(0);
-        }
-
-        @Override
-        protected void updateItem(ParentRow r, boolean empty) {
-            super.updateItem(r, empty);
-            if (empty || r == null) {
-                setGraphic(null);
-                setText(null);
-                return;
-            }
-            text.setText(r.text());
-            meta.setText(r.meta());
-            reason.setText(r.reason());
-            reason.maxWidthProperty().bind(widthProperty().subtract(24));
-            setText(null);
-            setGraphic(box);
-        }
-    }
-
-    public ListView<Row> list() {
-        return list;
-    }
-
-    /** Members in bold, then the score and kinds, then the reason. */
-    private static final class SuggestionCell extends ListCell<Row> {
-        private final Label members = new Label();
-        private final Label meta = new Label();
-        private final Label reason = new Label();
-        private final VBox box = new VBox(2, members, meta, reason);
-
-        SuggestionCell() {
-            members.setStyle("-fx-font-weight: bold;");
-            meta.getStyleClass().add("score");
-            reason.getStyleClass().add("reason");
-            reason.setWrapText(true);
-            box.setMinWidth(0);
-            reason.setMaxWidth(Region.USE_PREF_SIZE);
-            setPrefWidth(0);
-        }
-
-        @Override
-        protected void updateItem(Row r, boolean empty) {
-            super.updateItem(r, empty);
-            if (empty || r == null) {
-                setGraphic(null);
-                setText(null);
-                return;
-            }
-            members.setText(r.members());
-            meta.setText("score " + r.score() + " · " + r.kinds());
-            reason.setText(r.reason());
-            reason.maxWidthProperty().bind(widthProperty().subtract(24));
             meta.maxWidthProperty().bind(widthProperty().subtract(24));
+            reason.maxWidthProperty().bind(widthProperty().subtract(24));
+            setPrefWidth(0);
+        }
+
+        @Override
+        protected void updateItem(T r, boolean empty) {
+            super.updateItem(r, empty);
             setText(null);
+            if (empty || r == null) {
+                setGraphic(null);
+                return;
+            }
+            String[] l = lines.apply(r);
+            what.setText(l[0]);
+            meta.setText(l[1]);
+            reason.setText(l[2]);
             setGraphic(box);
         }
     }

@@ -47,9 +47,7 @@ class CloseDialogUiTest extends WindowTestBase {
     /** Parks the first candidate in the table; returns its term. */
     private String parkOne(FxRobot robot) {
         robot.interact(() -> view.harvestView().focusTable());
-        @SuppressWarnings("unchecked")
-        CandidateRow r = ((javafx.scene.control.TableView<CandidateRow>) robot.lookup("#harvest-table").query()).getSelectionModel()
-                .getSelectedItem();
+        CandidateRow r = table(robot).getSelectionModel().getSelectedItem();
         robot.type(KeyCode.P);
         WaitForAsyncUtils.waitForFxEvents();
         assertTrue(vm.hasUnsavedEdits());

@@ -49,11 +49,6 @@ class CuratorUiTest extends WindowTestBase {
         showWindow(stage);
     }
 
-    @SuppressWarnings("unchecked")
-    private TableView<CandidateRow> table(FxRobot robot) {
-        return robot.lookup("#harvest-table").queryAs(TableView.class);
-    }
-
     @Test
     void keepDropUndoRedoSaveAndReopen(FxRobot robot) throws Exception {
         Path ws = DemoWorkspace.mined(tmp.resolve("flow"));

@@ -43,16 +43,6 @@ class WalkthroughUiTest extends WindowTestBase {
         showWindow(stage);
     }
 
-    @SuppressWarnings("unchecked")
-    private TableView<CandidateRow> table(FxRobot robot) {
-        return robot.lookup("#harvest-table").queryAs(TableView.class);
-    }
-
-    @SuppressWarnings("unchecked")
-    private TreeView<TreeNode> tree(FxRobot robot) {
-        return robot.lookup("#hierarchy-tree").queryAs(TreeView.class);
-    }
-
     private void keys(FxRobot robot, KeyCode... combo) {
         robot.push(combo);
         WaitForAsyncUtils.waitForFxEvents();

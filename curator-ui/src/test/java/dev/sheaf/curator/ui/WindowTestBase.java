@@ -35,6 +35,18 @@ abstract class WindowTestBase {
         CuratorApp.show(stage, view, vm);
     }
 
+    /** The harvest's candidate table. */
+    @SuppressWarnings("unchecked")
+    static javafx.scene.control.TableView<dev.sheaf.curator.harvest.CandidateRow> table(FxRobot robot) {
+        return robot.lookup("#harvest-table").queryAs(javafx.scene.control.TableView.class);
+    }
+
+    /** The vocabulary tree. */
+    @SuppressWarnings("unchecked")
+    static javafx.scene.control.TreeView<dev.sheaf.curator.hierarchy.TreeNode> tree(FxRobot robot) {
+        return robot.lookup("#hierarchy-tree").queryAs(javafx.scene.control.TreeView.class);
+    }
+
     /** Waits (up to 3 minutes: the machine may be busy) for a condition, then for the FX queue to drain. */
     static void waitUntil(Callable<Boolean> c) throws Exception {
         WaitForAsyncUtils.waitFor(180, TimeUnit.SECONDS, c);
