@@ -239,6 +239,46 @@ class CuratorViewModelTest {
     }
 
     @Test
+    void saveAsWritesTheNewFileAndEditingContinuesThere(@TempDir Path tmp) throws Exception {
+        Harness h = opened(tmp);
+        Path original = h.vm.session().vocabularyFile();
+        String before = Files.readString(original, StandardCharsets.UTF_8);
+        CandidateRow first = h.undecided(0);
+        h.vm.harvest().park(List.of(first));
+        assertTrue(h.vm.titleProperty().get().startsWith("• "), "unsaved edits show in the title");
+        Path copy = tmp.resolve("ws/copy.vocab.json");
+        assertTrue(h.vm.saveAs(copy));
+        assertEquals(copy.toAbsolutePath().normalize(), h.vm.session().vocabularyFile().toAbsolutePath().normalize());
+        assertFalse(h.vm.hasUnsavedEdits());
+        assertTrue(h.vm.titleProperty().get().contains("copy.vocab.json") && !h.vm.titleProperty().get().startsWith("• "),
+                h.vm.titleProperty().get());
+        assertTrue(h.vm.statusProperty().get().startsWith("Saved as "), h.vm.statusProperty().get());
+        assertTrue(VocabularyStore.read(copy).decision(first.term()).isPresent(), "the copy has the edit");
+        assertEquals(before, Files.readString(original, StandardCharsets.UTF_8), "the original file is untouched");
+
+        // the next edit and Save go to the copy, not the original
+        CandidateRow second = h.undecided(0);
+        h.vm.harvest().drop(List.of(second));
+        assertTrue(h.vm.save());
+        assertTrue(VocabularyStore.read(copy).isDropped(second.term()));
+        assertEquals(before, Files.readString(original, StandardCharsets.UTF_8));
+        h.vm.closeSession();
+    }
+
+    @Test
+    void saveAsWhereNoFileCanBeWrittenSaysSoAndKeepsTheEdits(@TempDir Path tmp) throws Exception {
+        Harness h = opened(tmp);
+        h.vm.harvest().park(List.of(h.undecided(0)));
+        Path nowhere = tmp.resolve("ws/workspace.json/x.vocab.json"); // under a file: no folder can be made there
+        assertFalse(h.vm.saveAs(nowhere));
+        Notice n = h.notices.get(h.notices.size() - 1);
+        assertEquals(Notice.Kind.ERROR, n.kind());
+        assertTrue(h.vm.hasUnsavedEdits(), "still unsaved: " + n.text());
+        assertFalse(Files.exists(nowhere));
+        h.vm.closeSession();
+    }
+
+    @Test
     void refusesToOpenAVocabularyAnotherProgramHolds(@TempDir Path tmp) throws Exception {
         Path ws = DemoWorkspace.mined(tmp.resolve("ws"));
         try (VocabularyStore other = VocabularyStore.open(ws.resolve("fernhollow.vocab.json"))) {

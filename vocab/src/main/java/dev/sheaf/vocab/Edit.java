@@ -2,6 +2,7 @@ package dev.sheaf.vocab;
 
 import java.util.ArrayList;
 import java.util.Collection;
+import java.util.HashSet;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Objects;
@@ -57,7 +58,9 @@ public abstract sealed class Edit {
             }
         }
         Set<String> before = v.errorKeys();
+        Set<String> afterKeys = new HashSet<>();
         for (Finding f : VocabularyChecker.errors(after)) {
+            afterKeys.add(f.key());
             if (!before.contains(f.key())) {
                 problems.add("it would create an error (" + f.rule().id() + "): " + f.message());
             }
@@ -65,6 +68,8 @@ public abstract sealed class Edit {
         if (!problems.isEmpty()) {
             return Attempt.refused(problems);
         }
+        // the next edit starts from this snapshot: it need not check it again
+        after.knownErrorKeys(afterKeys);
         return new Attempt(after, forward, m.backward(), List.of());
     }
 

@@ -376,6 +376,13 @@ public final class Vocabulary {
         return k;
     }
 
+    /** Records the error keys of this snapshot when the edit that made it has just computed them. */
+    void knownErrorKeys(Set<String> keys) {
+        if (errorKeys == null) {
+            errorKeys = Set.copyOf(keys);
+        }
+    }
+
     private Index index() {
         Index i = index;
         if (i == null) {

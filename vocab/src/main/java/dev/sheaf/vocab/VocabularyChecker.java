@@ -100,11 +100,21 @@ public final class VocabularyChecker {
     // S13
     private void labelKindsOverlap() {
         for (Concept c : v.allConcepts()) {
-            TreeSet<Label> all = new TreeSet<>();
+            // most concepts carry each label once: look for a repeat before sorting anything
+            Set<Label> seen = new HashSet<>();
+            TreeSet<Label> repeated = null;
             for (ConceptLabel l : c.labels()) {
-                all.add(l.label());
+                if (!seen.add(l.label())) {
+                    if (repeated == null) {
+                        repeated = new TreeSet<>();
+                    }
+                    repeated.add(l.label());
+                }
             }
-            for (Label l : all) {
+            if (repeated == null) {
+                continue;
+            }
+            for (Label l : repeated) {
                 List<LabelKind> kinds = c.kindsOf(l);
                 if (kinds.size() > 1) {
                     List<String> words = new ArrayList<>();
@@ -119,7 +129,13 @@ public final class VocabularyChecker {
 
     // Z39.19: one preferred term per concept, non-preferred terms point to one concept
     private void sharedLabels() {
-        TreeMap<Label, List<Vocabulary.LabelUse>> sorted = new TreeMap<>(v.labelIndex());
+        // only labels on two or more uses can be shared; sort just those (the findings come out in label order)
+        TreeMap<Label, List<Vocabulary.LabelUse>> sorted = new TreeMap<>();
+        for (Map.Entry<Label, List<Vocabulary.LabelUse>> e : v.labelIndex().entrySet()) {
+            if (e.getValue().size() > 1) {
+                sorted.put(e.getKey(), e.getValue());
+            }
+        }
         for (Map.Entry<Label, List<Vocabulary.LabelUse>> e : sorted.entrySet()) {
             TreeSet<String> ids = new TreeSet<>();
             boolean nonPreferred = false;

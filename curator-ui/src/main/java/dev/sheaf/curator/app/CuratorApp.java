@@ -25,6 +25,32 @@ public final class CuratorApp extends Application {
         if (!args.isEmpty()) {
             vm.open(Path.of(args.get(0)));
         }
+        screenshotWhenReady(stage, vm);
+    }
+
+    /**
+     * With {@code -Dsheaf.curator.screenshot=FILE.png}: once the window is idle (workspace open or
+     * none given, no background work), saves a picture of it there, so the real desktop can be seen
+     * as a user sees it on a machine without a screen grabber (e.g. under xvfb-run).
+     */
+    private static void screenshotWhenReady(Stage stage, MainViewModel vm) {
+        String file = System.getProperty("sheaf.curator.screenshot");
+        if (file == null || file.isBlank()) {
+            return;
+        }
+        javafx.animation.Timeline poll = new javafx.animation.Timeline();
+        poll.getKeyFrames().add(new javafx.animation.KeyFrame(javafx.util.Duration.seconds(2), e -> {
+            if (!vm.background().runningProperty().get()) {
+                poll.stop();
+                try {
+                    System.err.println("sheaf curate: window picture saved to " + Screenshots.saveTo(stage.getScene(), Path.of(file)));
+                } catch (java.io.IOException ex) {
+                    System.err.println("sheaf curate: cannot save the window picture to " + file + ": " + ex.getMessage());
+                }
+            }
+        }));
+        poll.setCycleCount(javafx.animation.Animation.INDEFINITE);
+        poll.play();
     }
 
     /** The view-model with a background worker and an evidence-query worker, reporting on the JavaFX thread. */
@@ -44,10 +70,16 @@ public final class CuratorApp extends Application {
      */
     public static void installPanels(MainView view, MainViewModel vm) {
         dev.sheaf.curator.hierarchy.StructurePanels p = new dev.sheaf.curator.hierarchy.StructurePanels(vm.sessionProperty());
-        javafx.scene.control.SplitPane centre = new javafx.scene.control.SplitPane(
-                new dev.sheaf.curator.concepts.ConceptListView(vm.sessionProperty()).node(), p.hierarchy());
-        centre.setOrientation(javafx.geometry.Orientation.VERTICAL);
-        centre.setDividerPositions(0.2);
+        // the concept finder sits above the tree and opens its matches only while something is typed
+        dev.sheaf.curator.concepts.ConceptListView finder = dev.sheaf.curator.concepts.ConceptListView.finder(vm.sessionProperty());
+        javafx.scene.layout.BorderPane centre = new javafx.scene.layout.BorderPane(p.hierarchy());
+        centre.setTop(finder.node());
+        finder.setOnChosen(() -> {
+            javafx.scene.Node tree = centre.lookup("#hierarchy-tree");
+            if (tree != null) {
+                tree.requestFocus();
+            }
+        });
         view.setHierarchyView(centre);
         view.addSidePanel("Facet", p.facet());
         view.addSidePanel("Suggestions", p.suggestions());

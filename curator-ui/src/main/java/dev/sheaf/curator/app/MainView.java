@@ -75,10 +75,10 @@ public final class MainView {
         right.setOrientation(Orientation.VERTICAL);
         right.setDividerPositions(0.36);
         SplitPane main = new SplitPane(harvestView.node(), centre, right);
-        main.setDividerPositions(0.47, 0.68);
+        main.setDividerPositions(0.41, 0.69);
         main.getStyleClass().add("main-split");
         root.setTop(menus());
-        root.setCenter(main);
+        root.setCenter(new StackPane(main, startScreen()));
         root.setBottom(statusBar(vm.background()));
         vm.addNoticeListener(this::show);
     }
@@ -170,7 +170,23 @@ public final class MainView {
         MenuItem find = item("Filter the harvest", new KeyCodeCombination(KeyCode.F, KeyCombination.SHORTCUT_DOWN), harvestView::focusFilter);
         MenuItem table = item("Go to the candidate table", new KeyCodeCombination(KeyCode.L, KeyCombination.SHORTCUT_DOWN),
                 harvestView::focusTable);
-        Menu edit = new Menu("Edit", null, undo, redo, redo2, new SeparatorMenuItem(), find, table);
+        MenuItem findConcept = item("Find a concept", new KeyCodeCombination(KeyCode.G, KeyCombination.SHORTCUT_DOWN), () -> {
+            Node f = root.lookup("#concept-filter");
+            if (f != null) {
+                f.requestFocus();
+            }
+        });
+        MenuItem goTree = item("Go to the vocabulary tree", new KeyCodeCombination(KeyCode.T, KeyCombination.SHORTCUT_DOWN),
+                () -> focus("#hierarchy-tree", null));
+        MenuItem goMerges = item("Go to the merge suggestions", new KeyCodeCombination(KeyCode.M, KeyCombination.SHORTCUT_DOWN),
+                () -> focus("#suggestions-list", "Suggestions"));
+        MenuItem goParents = item("Go to the parent suggestions", new KeyCodeCombination(KeyCode.P, KeyCombination.SHORTCUT_DOWN),
+                () -> focus("#parents-list", "Suggestions"));
+        for (MenuItem i : new MenuItem[] {findConcept, goTree, goMerges, goParents}) {
+            i.disableProperty().bind(noSession);
+        }
+        Menu edit = new Menu("Edit", null, undo, redo, redo2, new SeparatorMenuItem(), find, table, findConcept, goTree, goMerges,
+                goParents);
 
         // Single-letter keys act in the candidate table only (so typing in a filter box never decides a term).
         Menu triage = new Menu("Triage", null,
@@ -187,6 +203,20 @@ public final class MainView {
         MenuBar bar = new MenuBar(file, edit, triage, help);
         bar.setUseSystemMenuBar(true);
         return bar;
+    }
+
+    /** Brings the side panel {@code tab} (when not null) to the front and puts the focus on the node {@code selector}, selecting its first row. */
+    private void focus(String selector, String tab) {
+        if (tab != null) {
+            showSidePanel(tab);
+        }
+        Node n = root.lookup(selector);
+        if (n != null) {
+            n.requestFocus();
+            if (n instanceof javafx.scene.control.ListView<?> l && l.getSelectionModel().getSelectedIndex() < 0 && !l.getItems().isEmpty()) {
+                l.getSelectionModel().select(0);
+            }
+        }
     }
 
     private static MenuItem item(String text, KeyCombination key, Runnable action) {
@@ -239,6 +269,78 @@ public final class MainView {
         box.getStyleClass().add("status-bar");
         box.setPadding(new Insets(4, 10, 4, 10));
         return box;
+    }
+
+    /**
+     * What the window shows while no workspace is open: what to do first, the button to open one,
+     * and the recent workspaces (Enter or double-click opens).
+     */
+    private Node startScreen() {
+        Label title = new Label("Sheaf curator");
+        title.getStyleClass().add("start-title");
+        Label what = new Label("Turn a harvest of terms mined from your listings into a vocabulary: keep, drop or park"
+                + " candidates, merge synonyms, build facets and their values, and save.");
+        what.setWrapText(true);
+        what.getStyleClass().add("start-text");
+        Label how = new Label("Open a workspace: a folder with a workspace.json (the demo shop is the folder sample-listings)."
+                + " When it has no harvest yet, its listings are mined first, in the background.");
+        how.setWrapText(true);
+        how.getStyleClass().add("muted");
+        Button open = new Button("Open a workspace…  (Ctrl+O)");
+        open.setId("start-open");
+        open.setDefaultButton(true);
+        open.setOnAction(e -> chooseWorkspace());
+        Label recentTitle = new Label("Recent workspaces");
+        recentTitle.getStyleClass().add("pane-title");
+        javafx.scene.control.ListView<Path> recent = new javafx.scene.control.ListView<>(vm.recentWorkspaces());
+        recent.setId("start-recent");
+        recent.setPrefHeight(180);
+        Label none = new Label("None yet: the workspaces you open are listed here.");
+        none.getStyleClass().add("muted");
+        recent.setPlaceholder(none);
+        recent.setOnKeyPressed(e -> {
+            if (e.getCode() == KeyCode.ENTER && recent.getSelectionModel().getSelectedItem() != null) {
+                openChecked(recent.getSelectionModel().getSelectedItem());
+                e.consume();
+            }
+        });
+        recent.setOnMouseClicked(e -> {
+            if (e.getClickCount() == 2 && recent.getSelectionModel().getSelectedItem() != null) {
+                openChecked(recent.getSelectionModel().getSelectedItem());
+            }
+        });
+        Label keys = new Label("F1 lists every key.");
+        keys.getStyleClass().add("key-hint");
+        VBox card = new VBox(12, title, what, how, open, recentTitle, recent, keys);
+        card.getStyleClass().add("start-card");
+        card.setMaxWidth(640);
+        card.setMaxHeight(Region.USE_PREF_SIZE);
+        card.setPadding(new Insets(28));
+        StackPane screen = new StackPane(card);
+        screen.setId("start-screen");
+        screen.getStyleClass().add("start-screen");
+        var showing = vm.sessionProperty().isNull().and(vm.background().runningProperty().not());
+        screen.visibleProperty().bind(showing);
+        // the first recent workspace is picked and focused whenever the screen shows (Enter opens it), else the open button
+        Runnable focusStart = () -> {
+            if (recent.getItems().isEmpty()) {
+                open.requestFocus();
+            } else {
+                recent.requestFocus();
+                recent.getSelectionModel().select(0);
+            }
+        };
+        showing.addListener((o, a, b) -> {
+            if (b) {
+                javafx.application.Platform.runLater(focusStart);
+            }
+        });
+        screen.sceneProperty().addListener((o, a, b) -> {
+            if (b != null && showing.get()) {
+                javafx.application.Platform.runLater(focusStart);
+            }
+        });
+        return screen;
     }
 
     // ------------------------------------------------------------------ dialogs
@@ -333,6 +435,9 @@ public final class MainView {
             "  E  show the evidence              Enter in the evidence list: open the listing",
             "Anywhere:",
             "  Ctrl+F  filter the harvest        Ctrl+L  back to the table",
+            "  Ctrl+G  find a concept (Enter goes to it in the tree)    Ctrl+T  the tree",
+            "  Ctrl+M  the merge suggestions (Enter merges)    Ctrl+P  the parent suggestions (Enter puts under)",
+            "In the tree: Ctrl+X then Ctrl+V move · Alt+→ / Alt+← indent / outdent · Ctrl+Shift+N new facet · F2 rename",
             "  Ctrl+Z  undo    Ctrl+Shift+Z or Ctrl+Y  redo",
             "  Ctrl+S  save    Ctrl+Shift+S  save as    Ctrl+O  open a workspace    Ctrl+Q  quit",
             "Unsaved edits are written to the edit journal at once, so nothing is lost if the program stops.");

@@ -73,6 +73,12 @@ public final class MainViewModel {
             if (now != null) {
                 now.dirtyProperty().addListener((x, a, b) -> updateTitle());
                 now.vocabularyProperty().addListener((x, a, b) -> updateTitle());
+                // every edit, from whichever panel, says what it did (the harvest's own message follows for its edits)
+                now.addVocabularyListener(c -> {
+                    if (c.action() == dev.sheaf.vocab.EditHistory.Action.DO) {
+                        status.set(c.description() + ". Undo: Ctrl+Z.");
+                    }
+                });
             }
         });
         harvest.messageProperty().addListener((o, a, b) -> {

@@ -7,16 +7,38 @@ import javafx.scene.control.Label;
 import javafx.scene.control.ListCell;
 import javafx.scene.control.ListView;
 import javafx.scene.control.TextField;
+import javafx.scene.input.KeyCode;
 import javafx.scene.layout.BorderPane;
 import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
 
-/** The searchable concept list: a filter box over the concepts; selecting one selects it for the whole window. */
+/**
+ * The searchable concept list: a filter box over the concepts; selecting one selects it for the
+ * whole window. Keys in the box: Down goes to the matches, Enter picks the first match, Esc
+ * clears. As a finder above the tree ({@link #finder}) the matches show only while something is
+ * typed, so the tree keeps the room.
+ */
 public final class ConceptListView {
     private final BorderPane root = new BorderPane();
     private final ConceptListViewModel vm = new ConceptListViewModel();
+    private Runnable onChosen = () -> { };
 
+    /** The full list (the centre of the window when no tree is installed). */
     public ConceptListView(ObservableValue<CuratorSession> session) {
+        this(session, false);
+    }
+
+    /** A finder: the matches show only while the box has text, at most {@code 220} pixels high. */
+    public static ConceptListView finder(ObservableValue<CuratorSession> session) {
+        return new ConceptListView(session, true);
+    }
+
+    /** What to do after Enter picked a concept (the window moves the focus to the tree). */
+    public void setOnChosen(Runnable r) {
+        onChosen = r == null ? () -> { } : r;
+    }
+
+    private ConceptListView(ObservableValue<CuratorSession> session, boolean finder) {
         session.addListener((o, a, b) -> vm.setSession(b));
         vm.setSession(session.getValue());
         Label title = new Label("Vocabulary");
@@ -51,6 +73,32 @@ public final class ConceptListView {
             }
         });
         list.getSelectionModel().selectedItemProperty().addListener((o, a, b) -> vm.select(b));
+        filter.setOnKeyPressed(e -> {
+            if (e.getCode() == KeyCode.DOWN && !list.getItems().isEmpty()) {
+                list.requestFocus();
+                list.getSelectionModel().select(0);
+                e.consume();
+            } else if (e.getCode() == KeyCode.ENTER && !list.getItems().isEmpty()) {
+                list.getSelectionModel().select(0);
+                vm.select(list.getItems().get(0));
+                onChosen.run();
+                e.consume();
+            } else if (e.getCode() == KeyCode.ESCAPE) {
+                filter.clear();
+                e.consume();
+            }
+        });
+        list.setOnKeyPressed(e -> {
+            if (e.getCode() == KeyCode.ENTER && list.getSelectionModel().getSelectedItem() != null) {
+                vm.select(list.getSelectionModel().getSelectedItem());
+                onChosen.run();
+                e.consume();
+            } else if (e.getCode() == KeyCode.ESCAPE) {
+                filter.clear();
+                filter.requestFocus();
+                e.consume();
+            }
+        });
         Label empty = new Label("No concepts yet: keep terms from the harvest (K).");
         empty.getStyleClass().add("muted");
         empty.setWrapText(true);
@@ -61,7 +109,22 @@ public final class ConceptListView {
         summary.getStyleClass().add("summary");
         summary.setPadding(new Insets(4, 10, 4, 10));
         root.setBottom(summary);
+        if (finder) {
+            filter.setPromptText("Find a concept (Ctrl+G): type, then Enter");
+            var searching = filter.textProperty().isNotEmpty();
+            list.visibleProperty().bind(searching);
+            list.managedProperty().bind(searching);
+            summary.visibleProperty().bind(searching);
+            summary.managedProperty().bind(searching);
+            list.setMaxHeight(220);
+            list.setPrefHeight(220);
+        }
         root.getStyleClass().add("concept-pane");
+    }
+
+    /** Puts the focus in the filter box. */
+    public void focusFilter() {
+        root.lookup("#concept-filter").requestFocus();
     }
 
     public Region node() {

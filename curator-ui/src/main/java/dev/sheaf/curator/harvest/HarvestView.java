@@ -61,7 +61,7 @@ public final class HarvestView {
 
     public void focusTable() {
         table.requestFocus();
-        if (table.getSelectionModel().isEmpty() && !table.getItems().isEmpty()) {
+        if (table.getSelectionModel().getSelectedItem() == null && !table.getItems().isEmpty()) {
             table.getSelectionModel().select(0);
             table.getFocusModel().focus(0);
         }
@@ -120,7 +120,7 @@ public final class HarvestView {
             }
         });
         category.valueProperty().bindBidirectional(vm.categoryProperty());
-        category.setPrefWidth(150);
+        category.setPrefWidth(130);
         TextField minScore = number("min score", vm.minScoreProperty().get());
         minScore.setId("harvest-min-score");
         minScore.textProperty().bindBidirectional(vm.minScoreProperty());
@@ -130,6 +130,7 @@ public final class HarvestView {
         Button clear = new Button("Clear");
         clear.setTooltip(new Tooltip("Clear the filters (the decision filter stays)"));
         clear.setOnAction(e -> vm.clearFilters());
+        clear.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
         HBox row2 = new HBox(8, words, category, minScore, minCount, clear);
         row2.setAlignment(Pos.CENTER_LEFT);
         VBox box = new VBox(6, row1, row2);
@@ -152,15 +153,16 @@ public final class HarvestView {
         // item count: with 20,000 candidates that measuring, not the filter, was most of a keystroke.
         table.setFixedCellSize(24);
         table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
-        table.getColumns().add(column("#", 54, r -> r.rank(), Integer.class, false));
+        // the n-gram length is a filter (Any length), not a column: the term, its counts and the decision need the width
+        table.getColumns().add(column("#", 46, r -> r.rank(), Integer.class, false));
         TableColumn<CandidateRow, String> term = new TableColumn<>("Term");
         term.setCellValueFactory(c -> new ReadOnlyObjectWrapper<>(c.getValue().term()));
-        term.setPrefWidth(180);
+        term.setPrefWidth(170);
+        term.setMinWidth(110);
         table.getColumns().add(term);
-        table.getColumns().add(column("Words", 58, CandidateRow::words, Integer.class, true));
-        table.getColumns().add(column("Count", 62, CandidateRow::frequency, Long.class, true));
-        table.getColumns().add(column("Listings", 66, CandidateRow::df, Long.class, true));
-        TableColumn<CandidateRow, Double> score = column("Score", 62, CandidateRow::score, Double.class, true);
+        table.getColumns().add(column("Count", 56, CandidateRow::frequency, Long.class, true));
+        table.getColumns().add(column("Listings", 64, CandidateRow::df, Long.class, true));
+        TableColumn<CandidateRow, Double> score = column("Score", 54, CandidateRow::score, Double.class, true);
         score.setCellFactory(c -> new TableCell<>() {
             @Override
             protected void updateItem(Double d, boolean empty) {
@@ -172,12 +174,13 @@ public final class HarvestView {
         table.getColumns().add(score);
         TableColumn<CandidateRow, String> cat = new TableColumn<>("Category");
         cat.setCellValueFactory(c -> new ReadOnlyObjectWrapper<>(c.getValue().topCategory()));
-        cat.setPrefWidth(110);
+        cat.setPrefWidth(100);
+        cat.setMinWidth(80);
         table.getColumns().add(cat);
         TableColumn<CandidateRow, CandidateRow> decision = new TableColumn<>("Decision");
         decision.setCellValueFactory(c -> new ReadOnlyObjectWrapper<>(c.getValue()));
         decision.setComparator((a, b) -> a.state().compareTo(b.state()));
-        decision.setPrefWidth(150);
+        decision.setPrefWidth(90);
         decision.setCellFactory(c -> new DecisionCell());
         table.getColumns().add(decision);
         vm.shown().comparatorProperty().bind(table.comparatorProperty());
@@ -243,6 +246,7 @@ public final class HarvestView {
         summary.setId("harvest-summary");
         summary.textProperty().bind(vm.summaryProperty());
         summary.getStyleClass().add("summary");
+        summary.setWrapText(true);
         Label keys = new Label("Keys: K keep · Shift+K as a label of the selected concept · D drop · P park · U forget");
         keys.getStyleClass().add("keys-hint");
         VBox box = new VBox(2, summary, keys);

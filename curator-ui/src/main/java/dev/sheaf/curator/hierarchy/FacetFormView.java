@@ -4,7 +4,13 @@ import dev.sheaf.vocab.ValueKind;
 import java.util.Objects;
 import javafx.collections.FXCollections;
 import javafx.geometry.Insets;
+import javafx.geometry.Pos;
+import javafx.scene.control.Button;
 import javafx.scene.control.CheckBox;
+import javafx.scene.control.ListView;
+import javafx.scene.input.KeyCode;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.Priority;
 import javafx.scene.control.ChoiceBox;
 import javafx.scene.control.Label;
 import javafx.scene.control.TextField;
@@ -111,6 +117,8 @@ public final class FacetFormView extends VBox {
         unit.managedProperty().bind(unit.visibleProperty());
         grid.disableProperty().bind(vm.availableProperty().not());
 
+        VBox ranges = rangesBox(vm);
+
         Label hint = new Label("Categories: comma-separated; empty means every category; Enter applies.");
         hint.getStyleClass().add("key-hint");
         hint.setWrapText(true);
@@ -120,6 +128,59 @@ public final class FacetFormView extends VBox {
         message.setWrapText(true);
         message.textProperty().bind(vm.messageProperty());
 
-        getChildren().addAll(title, caution, grid, hint, message);
+        getChildren().addAll(title, caution, grid, ranges, hint, message);
+    }
+
+    /** The named ranges of a number facet: the list, Delete takes the selected one out; name, from, to and Enter add one. */
+    private static VBox rangesBox(FacetFormViewModel vm) {
+        Label head = new Label("Ranges (from inclusive, to exclusive; leave a side empty for open)");
+        head.setWrapText(true);
+        head.getStyleClass().add("form-subtitle");
+        ListView<String> list = new ListView<>(vm.ranges());
+        list.setId("facet-ranges");
+        list.setPrefHeight(120);
+        list.setPlaceholder(new Label("No ranges yet: add one below"));
+        list.setOnKeyPressed(e -> {
+            if (e.getCode() == KeyCode.DELETE || e.getCode() == KeyCode.BACK_SPACE) {
+                vm.removeRange(list.getSelectionModel().getSelectedIndex());
+                e.consume();
+            }
+        });
+        TextField name = field("facet-range-name", "name, e.g. light", vm.rangeNameProperty());
+        TextField from = field("facet-range-from", "from", vm.rangeFromProperty());
+        TextField to = field("facet-range-to", "to", vm.rangeToProperty());
+        from.setPrefColumnCount(5);
+        to.setPrefColumnCount(5);
+        HBox.setHgrow(name, Priority.ALWAYS);
+        Button add = new Button("Add range");
+        add.setId("facet-range-add");
+        add.setOnAction(e -> vm.addRange());
+        for (TextField f : new TextField[] {name, from, to}) {
+            f.setOnAction(e -> {
+                if (vm.addRange()) {
+                    name.requestFocus();
+                }
+            });
+        }
+        Button remove = new Button("Remove");
+        remove.setOnAction(e -> vm.removeRange(list.getSelectionModel().getSelectedIndex()));
+        remove.disableProperty().bind(list.getSelectionModel().selectedItemProperty().isNull());
+        HBox row = new HBox(6, name, from, to, add);
+        row.setAlignment(Pos.CENTER_LEFT);
+        HBox under = new HBox(6, remove, new Label("(or Delete in the list)"));
+        under.setAlignment(Pos.CENTER_LEFT);
+        VBox box = new VBox(6, head, list, row, under);
+        box.setId("facet-ranges-box");
+        box.visibleProperty().bind(vm.valueKindProperty().isEqualTo(ValueKind.NUMBER).and(vm.availableProperty()));
+        box.managedProperty().bind(box.visibleProperty());
+        return box;
+    }
+
+    private static TextField field(String id, String prompt, javafx.beans.property.StringProperty p) {
+        TextField f = new TextField();
+        f.setId(id);
+        f.setPromptText(prompt);
+        f.textProperty().bindBidirectional(p);
+        return f;
     }
 }

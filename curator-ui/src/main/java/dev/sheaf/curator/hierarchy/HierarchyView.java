@@ -107,8 +107,8 @@ public final class HierarchyView extends BorderPane {
         Button concept = button("+ Concept", "Add a concept under the selected row (Ctrl+N)", () -> vm.beginNewConcept(selected()));
         Button rename = button("Rename", "Rename the selected row; the old name stays as an alternative label (F2)",
                 () -> vm.beginRename(selected()));
-        Button indent = button("Indent", "Put the selected concept under the row above it (Alt+→)", () -> vm.indent(selectedOrNone()));
-        Button outdent = button("Outdent", "Take the selected concept one level up (Alt+←)", () -> vm.outdent(selectedOrNone()));
+        Button indent = button("→ In", "Put the selected concept under the row above it (Alt+→)", () -> vm.indent(selectedOrNone()));
+        Button outdent = button("← Out", "Take the selected concept one level up (Alt+←)", () -> vm.outdent(selectedOrNone()));
         ToolBar bar = new ToolBar(facet, concept, rename, indent, outdent);
         bar.getStyleClass().add("hierarchy-toolbar");
         return bar;

@@ -338,7 +338,7 @@ public final class HierarchyViewModel {
         message.set("Cut \"" + v.displayLabel(what.id()) + "\": select where it goes and paste (Ctrl+V)");
     }
 
-    /** Moves the cut concept under {@code target}. */
+    /** Moves the cut concept under {@code target} and selects it there, so the curator sees where it went. */
     public boolean paste(String target) {
         Placed p = cut.get();
         if (p == null) {
@@ -351,6 +351,7 @@ public final class HierarchyViewModel {
         boolean ok = moveUnder(p, target);
         if (ok) {
             cut.set(null);
+            select(p.id());
         }
         return ok;
     }

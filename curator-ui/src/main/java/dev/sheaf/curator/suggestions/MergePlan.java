@@ -1,5 +1,6 @@
 package dev.sheaf.curator.suggestions;
 
+import dev.sheaf.miner.suggest.HierarchySuggestion;
 import dev.sheaf.miner.suggest.Suggestion;
 import dev.sheaf.vocab.Concept;
 import dev.sheaf.vocab.Decision;
@@ -31,6 +32,10 @@ import java.util.Set;
  * </ul>
  * Each edit is checked against the result of the previous one before it is added, so a plan is
  * either valid as a whole or refused with the reason.
+ *
+ * <p>A parent (hierarchy) suggestion is answered by {@link #putUnder}: the child concept moves
+ * under the parent concept (or, {@code also}, gets it as one more parent); a child that is still a
+ * plain term is kept as a new concept there. The parent must be a concept (or facet) already.
  */
 public final class MergePlan {
     private MergePlan() {
@@ -140,6 +145,30 @@ public final class MergePlan {
             return keepApart(s);
         }
         return Optional.of(Edit.batch("Dismiss the suggestion " + s.key(), edits));
+    }
+
+    /**
+     * The edit that puts the child of {@code h} under its parent: moved there, or with {@code also}
+     * added as one more parent; a plain-term child becomes a new concept under it, recorded as kept.
+     *
+     * @throws IllegalArgumentException with the reason to show when it cannot be done
+     */
+    public static Edit putUnder(Vocabulary v, HierarchySuggestion h, boolean also) {
+        String parent = h.parent().conceptId();
+        if (parent == null || !v.contains(parent)) {
+            throw new IllegalArgumentException("\"" + h.parent().shown() + "\" is not in the vocabulary yet; "
+                    + (h.parent().facet() ? "make it a facet first (Ctrl+Shift+N in the tree)" : "keep it as a concept first (K in the harvest)"));
+        }
+        String child = h.child().conceptId();
+        String under = v.displayLabel(parent);
+        if (child != null && v.contains(child)) {
+            String what = (also ? "Put \"" : "Move \"") + v.displayLabel(child) + (also ? "\" also under \"" : "\" under \"") + under + "\"";
+            return Edit.batch(what, List.of(also ? Edit.addBroader(child, parent) : Edit.moveUnder(child, parent)));
+        }
+        String id = v.newId(h.child().shown());
+        Edit make = Edit.addConcept(Concept.builder(id).prefLabel(Label.of(h.child().shown(), v.defaultLanguage())).broader(parent).build());
+        return Edit.batch("Keep \"" + h.child().shown() + "\" as a new concept under \"" + under + "\"",
+                List.of(make, Edit.recordDecision(Decision.kept(h.child().term(), id))));
     }
 
     private static Vocabulary add(List<Edit> edits, Vocabulary w, Edit e) {

@@ -1,15 +1,18 @@
 package dev.sheaf.curator.suggestions;
 
 import dev.sheaf.curator.hierarchy.HierarchyView;
+import dev.sheaf.curator.suggestions.SuggestionsViewModel.ParentRow;
 import dev.sheaf.curator.suggestions.SuggestionsViewModel.Row;
 import java.util.Objects;
 import javafx.geometry.Insets;
+import javafx.geometry.Orientation;
 import javafx.geometry.Pos;
 import javafx.scene.control.Button;
 import javafx.scene.control.ChoiceBox;
 import javafx.scene.control.Label;
 import javafx.scene.control.ListCell;
 import javafx.scene.control.ListView;
+import javafx.scene.control.SplitPane;
 import javafx.scene.control.Tooltip;
 import javafx.scene.input.KeyCode;
 import javafx.scene.layout.BorderPane;
@@ -26,6 +29,7 @@ import javafx.scene.layout.VBox;
 public final class SuggestionsView extends BorderPane {
     static final String KEYS = "Enter or M merge · 1–9 pick the preferred label · A keep apart · D dismiss";
     private final ListView<Row> list = new ListView<>();
+    private final ListView<ParentRow> parents = new ListView<>();
 
     public SuggestionsView(SuggestionsViewModel vm) {
         Objects.requireNonNull(vm);
@@ -40,22 +44,9 @@ public final class SuggestionsView extends BorderPane {
         BorderPane head = new BorderPane(scope);
         BorderPane.setAlignment(scope, Pos.CENTER_LEFT);
         head.setPadding(new Insets(4, 6, 4, 6));
-        setTop(head);
 
-        list.setId("suggestions-list");
-        list.setItems(vm.rows());
-        list.setPlaceholder(new Label("No merge suggestions here"));
-        list.setCellFactory(l -> new SuggestionCell());
-        list.getSelectionModel().selectedItemProperty().addListener((o, a, b) -> {
-            if (b != null && b != vm.selectedProperty().get()) {
-                vm.selectedProperty().set(b);
-            }
-        });
-        vm.selectedProperty().addListener((o, a, b) -> {
-            if (b != null && list.getSelectionModel().getSelectedItem() != b) {
-                list.getSelectionModel().select(b);
-            }
-        });
+        follow(list, "suggestions-list", vm.rows(), vm.selectedProperty(), "No merge suggestions here",
+                r -> new String[] {r.members(), "score " + r.score() + " · " + r.kinds(), r.reason()});
         list.setOnKeyPressed(e -> {
             KeyCode k = e.getCode();
             if (e.isShortcutDown() || e.isAltDown()) {
@@ -77,7 +68,6 @@ public final class SuggestionsView extends BorderPane {
                 e.consume();
             }
         });
-        setCenter(list);
 
         ChoiceBox<String> pref = new ChoiceBox<>(vm.preferredChoices());
         pref.setId("suggestions-preferred");
@@ -111,45 +101,116 @@ public final class SuggestionsView extends BorderPane {
         Label hint = new Label(KEYS);
         hint.getStyleClass().add("key-hint");
         hint.setWrapText(true);
-        VBox bottom = new VBox(6, prefRow, buttons, message, hint);
+        VBox answers = new VBox(6, prefRow, buttons, hint);
+        answers.setPadding(new Insets(6));
+        BorderPane merges = new BorderPane(list, head, null, answers, null);
+        VBox bottom = new VBox(4, message);
         bottom.setPadding(new Insets(6));
+        SplitPane split = new SplitPane(merges, parentsPane(vm));
+        split.setOrientation(Orientation.VERTICAL);
+        split.setDividerPositions(0.5);
+        setTop(null);
+        setCenter(split);
         setBottom(bottom);
     }
 
-    public ListView<Row> list() {
-        return list;
+    /** The parent suggestions: "zipper ⊃ two way zipper"; Enter moves the child under the parent, Shift+Enter puts it also there. */
+    private Region parentsPane(SuggestionsViewModel vm) {
+        Label scope = new Label();
+        scope.setId("parents-scope");
+        scope.getStyleClass().add("panel-title");
+        scope.textProperty().bind(vm.parentScopeProperty());
+        scope.setWrapText(true);
+        follow(parents, "parents-list", vm.parents(), vm.selectedParentProperty(), "No parent suggestions here",
+                r -> new String[] {r.text(), r.meta(), r.reason()});
+        parents.setOnKeyPressed(e -> {
+            if (e.getCode() == KeyCode.ENTER && !e.isShortcutDown() && !e.isAltDown()) {
+                vm.putUnder(e.isShiftDown());
+                e.consume();
+            }
+        });
+        Button under = new Button("Put under");
+        under.setId("parents-put-under");
+        under.setTooltip(new Tooltip("Move the child under the parent (Enter)"));
+        under.setOnAction(e -> vm.putUnder(false));
+        Button also = new Button("Also under");
+        also.setTooltip(new Tooltip("Keep the child where it is and put it under the parent as well (Shift+Enter)"));
+        also.setOnAction(e -> vm.putUnder(true));
+        for (Button b : new Button[] {under, also}) {
+            b.disableProperty().bind(vm.selectedParentProperty().isNull());
+            b.setFocusTraversable(false);
+        }
+        Label keys = new Label("Enter put under · Shift+Enter also under");
+        keys.getStyleClass().add("key-hint");
+        keys.setWrapText(true);
+        under.setMinWidth(Region.USE_PREF_SIZE);
+        also.setMinWidth(Region.USE_PREF_SIZE);
+        HBox buttons = new HBox(6, under, also);
+        VBox row = new VBox(6, buttons, keys);
+        row.setPadding(new Insets(6));
+        BorderPane head = new BorderPane(scope);
+        BorderPane.setAlignment(scope, Pos.CENTER_LEFT);
+        head.setPadding(new Insets(4, 6, 4, 6));
+        return new BorderPane(parents, head, null, row, null);
     }
 
-    /** Members in bold, then the score and kinds, then the reason. */
-    private static final class SuggestionCell extends ListCell<Row> {
-        private final Label members = new Label();
+    public ListView<ParentRow> parentList() {
+        return parents;
+    }
+
+    /** Fills {@code l} from {@code rows} and keeps its selection and the view-model's {@code selected} the same, both ways. */
+    private static <T> void follow(ListView<T> l, String id, javafx.collections.ObservableList<T> rows,
+                                   javafx.beans.property.ObjectProperty<T> selected, String none,
+                                   java.util.function.Function<T, String[]> lines) {
+        l.setId(id);
+        l.setItems(rows);
+        l.setPlaceholder(new Label(none));
+        l.setCellFactory(x -> new ThreeLineCell<>(lines));
+        l.getSelectionModel().selectedItemProperty().addListener((o, a, b) -> {
+            if (b != null && b != selected.get()) {
+                selected.set(b);
+            }
+        });
+        selected.addListener((o, a, b) -> {
+            if (b != null && l.getSelectionModel().getSelectedItem() != b) {
+                l.getSelectionModel().select(b);
+            }
+        });
+    }
+
+    /** A suggestion as three lines: what (bold), the score line, the reason (both wrapped to the cell). */
+    private static final class ThreeLineCell<T> extends ListCell<T> {
+        private final java.util.function.Function<T, String[]> lines;
+        private final Label what = new Label();
         private final Label meta = new Label();
         private final Label reason = new Label();
-        private final VBox box = new VBox(2, members, meta, reason);
+        private final VBox box = new VBox(2, what, meta, reason);
 
-        SuggestionCell() {
-            members.setStyle("-fx-font-weight: bold;");
+        ThreeLineCell(java.util.function.Function<T, String[]> lines) {
+            this.lines = lines;
+            what.setStyle("-fx-font-weight: bold;");
             meta.getStyleClass().add("score");
+            meta.setWrapText(true);
             reason.getStyleClass().add("reason");
             reason.setWrapText(true);
             box.setMinWidth(0);
-            reason.setMaxWidth(Region.USE_PREF_SIZE);
+            meta.maxWidthProperty().bind(widthProperty().subtract(24));
+            reason.maxWidthProperty().bind(widthProperty().subtract(24));
             setPrefWidth(0);
         }
 
         @Override
-        protected void updateItem(Row r, boolean empty) {
+        protected void updateItem(T r, boolean empty) {
             super.updateItem(r, empty);
+            setText(null);
             if (empty || r == null) {
                 setGraphic(null);
-                setText(null);
                 return;
             }
-            members.setText(r.members());
-            meta.setText("score " + r.score() + " · " + r.kinds());
-            reason.setText(r.reason());
-            reason.maxWidthProperty().bind(widthProperty().subtract(24));
-            setText(null);
+            String[] l = lines.apply(r);
+            what.setText(l[0]);
+            meta.setText(l[1]);
+            reason.setText(l[2]);
             setGraphic(box);
         }
     }

@@ -4,6 +4,7 @@ import dev.sheaf.curator.checks.LatestRun;
 import dev.sheaf.curator.session.CuratorSession;
 import dev.sheaf.curator.session.Selection;
 import dev.sheaf.miner.mine.Harvest;
+import dev.sheaf.miner.suggest.HierarchySuggestion;
 import dev.sheaf.miner.suggest.SuggestOptions;
 import dev.sheaf.miner.suggest.Suggester;
 import dev.sheaf.miner.suggest.Suggestion;
@@ -32,6 +33,11 @@ import javafx.collections.ObservableList;
  * one undoable edit that the suggestion engine reads back, so an answered suggestion does not come
  * back ({@link MergePlan}).
  *
+ * <p>Beside them, the parent suggestions ({@link #parents()}: "zipper" above "two way zipper",
+ * a spec key above its values, a term whose listings contain another's) for the same selection,
+ * answered by {@link #putUnder} (move there, or also there); an answered one drops out because the
+ * engine sees the child under the parent.
+ *
  * <p>The {@link Suggester} is built from the session's harvest on a background thread (again when
  * the harvest changes); after each edit it is only filtered against the new vocabulary, which is
  * quick. UI thread only.
@@ -52,7 +58,24 @@ public final class SuggestionsViewModel {
     public record Row(Suggestion suggestion, String members, String score, String reason, String kinds) {
     }
 
+    /**
+     * One parent suggestion as shown.
+     *
+     * @param suggestion the suggestion
+     * @param text "zipper ⊃ two way zipper" (parent first)
+     * @param meta "score 0.80 · head-modifier · parent is a concept"
+     * @param reason the engine's sentence
+     */
+    public record ParentRow(HierarchySuggestion suggestion, String text, String meta, String reason) {
+    }
+
+    /** Parent suggestions shown at most. */
+    public static final int MAX_PARENTS = 200;
+
     private final CuratorSession session;
+    private final ObservableList<ParentRow> parents = FXCollections.observableArrayList();
+    private final ObjectProperty<ParentRow> selectedParent = new SimpleObjectProperty<>(this, "selectedParent");
+    private final ReadOnlyStringWrapper parentScope = new ReadOnlyStringWrapper(this, "parentScope", "");
     private final LatestRun<Suggester> build;
     private final ObservableList<Row> rows = FXCollections.observableArrayList();
     private final ObjectProperty<Row> selected = new SimpleObjectProperty<>(this, "selected");
@@ -95,8 +118,10 @@ public final class SuggestionsViewModel {
         Harvest h = session.harvest();
         suggester = null;
         rows.clear();
+        parents.clear();
         if (h == null) {
             scope.set("No harvest yet: mine the workspace to get merge suggestions");
+            parentScope.set("No harvest yet: no parent suggestions");
             return;
         }
         scope.set("Looking for synonyms and variants…");
@@ -145,6 +170,52 @@ public final class SuggestionsViewModel {
         }
         rows.setAll(out);
         selected.set(again != null ? again : out.isEmpty() ? null : out.get(0));
+        showParents(sel, v);
+    }
+
+    private void showParents(Selection sel, Vocabulary v) {
+        List<HierarchySuggestion> list;
+        String where;
+        if (sel.focus() == Selection.Focus.TERM && sel.term() != null) {
+            list = suggester.hierarchyForTerm(sel.term());
+            where = " for the term \"" + sel.term() + "\"";
+        } else if (sel.focus() == Selection.Focus.CONCEPT && sel.concept() != null && v.contains(sel.concept())) {
+            list = suggester.hierarchyForConcept(sel.concept());
+            where = " for \"" + v.displayLabel(sel.concept()) + "\"";
+        } else {
+            list = suggester.hierarchy();
+            where = " in all";
+        }
+        int n = list.size();
+        if (n > MAX_PARENTS) {
+            list = list.subList(0, MAX_PARENTS);
+        }
+        parentScope.set((n == 1 ? "1 parent suggestion" : n + " parent suggestions") + where
+                + (n > MAX_PARENTS ? " (the best " + MAX_PARENTS + " shown)" : ""));
+        String keep = selectedParent.get() == null ? null : selectedParent.get().suggestion().key();
+        List<ParentRow> out = new ArrayList<>(list.size());
+        ParentRow again = null;
+        for (HierarchySuggestion h : list) {
+            ParentRow r = parentRow(v, h);
+            out.add(r);
+            if (h.key().equals(keep)) {
+                again = r;
+            }
+        }
+        parents.setAll(out);
+        selectedParent.set(again != null ? again : out.isEmpty() ? null : out.get(0));
+    }
+
+    static ParentRow parentRow(Vocabulary v, HierarchySuggestion h) {
+        String parent = h.parent().conceptId() != null && v.contains(h.parent().conceptId()) ? v.displayLabel(h.parent().conceptId())
+                : h.parent().shown();
+        String child = h.child().conceptId() != null && v.contains(h.child().conceptId()) ? v.displayLabel(h.child().conceptId())
+                : h.child().shown();
+        boolean ready = h.parent().conceptId() != null && v.contains(h.parent().conceptId());
+        String state = ready ? (h.child().conceptId() != null ? "both concepts" : "new term")
+                : h.parent().facet() ? "facet not made yet" : "parent not kept yet";
+        return new ParentRow(h, parent + " ⊃ " + child, String.format(Locale.ROOT, "score %.2f · %s · %s", h.score(), h.kind().word(), state),
+                h.reason());
     }
 
     private static String count(int n) {
@@ -227,6 +298,21 @@ public final class SuggestionsViewModel {
         return true;
     }
 
+    /** Puts the selected parent suggestion's child under its parent: moved there, or with {@code also} one more parent. */
+    public boolean putUnder(boolean also) {
+        ParentRow r = selectedParent.get();
+        if (r == null) {
+            return say("Not done: select a parent suggestion first");
+        }
+        Edit e;
+        try {
+            e = MergePlan.putUnder(session.vocabulary(), r.suggestion(), also);
+        } catch (IllegalArgumentException ex) {
+            return say("Not done: " + ex.getMessage());
+        }
+        return apply(e);
+    }
+
     private boolean apply(Edit e) {
         try {
             String d = e.describe(session.vocabulary());
@@ -268,6 +354,21 @@ public final class SuggestionsViewModel {
     /** What the list shows ("3 merge suggestions for …"). */
     public ReadOnlyStringProperty scopeProperty() {
         return scope.getReadOnlyProperty();
+    }
+
+    /** The parent suggestions for the current selection, best first. */
+    public ObservableList<ParentRow> parents() {
+        return parents;
+    }
+
+    /** The parent suggestion {@link #putUnder} answers. */
+    public ObjectProperty<ParentRow> selectedParentProperty() {
+        return selectedParent;
+    }
+
+    /** What the parent list shows ("4 parent suggestions for …"). */
+    public ReadOnlyStringProperty parentScopeProperty() {
+        return parentScope.getReadOnlyProperty();
     }
 
     /** What the last answer did, or why it was not done. */

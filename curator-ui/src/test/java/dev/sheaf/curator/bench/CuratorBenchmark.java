@@ -88,7 +88,9 @@ public final class CuratorBenchmark {
         row("floor: read harvest.json alone (Jackson), cold", readHarvest, readHarvestCpu, "");
         row("floor: read the vocabulary alone, cold", readVocab, readVocabCpu, "");
 
-        // the whole open, as the window does it: session (harvest, vocabulary store with lock and journal) and the table's rows
+        // the whole open, as the window does it: session (harvest, vocabulary store with lock and journal) and the table's rows;
+        // beside it where the wall time went: this thread's CPU, the other threads' (GC, JIT), and the rest (waiting for a core or the disk)
+        Spent spent = Spent.now();
         t0 = System.nanoTime();
         c0 = cpu();
         CuratorSession s = CuratorSession.open(dir);
@@ -100,6 +102,14 @@ public final class CuratorBenchmark {
         double openCpu = cpuMs(c0);
         row("open: session (harvest + vocabulary + lock + journal)", sessionMs, sessionCpu, "");
         row("open: session and table rows with decision states", openMs, openCpu, target(openMs, openCpu, 2000, "< 2 s"));
+        spent.print("open", openMs, openCpu);
+        // the steps of the open again, now that the files are in the page cache and the code compiled
+        t0 = System.nanoTime();
+        HarvestFiles.readJson(CuratorSession.harvestFile(ws));
+        row("  again, warm: read harvest.json", ms(t0), "");
+        t0 = System.nanoTime();
+        VocabularyStore.read(vf);
+        row("  again, warm: read the vocabulary", ms(t0), "");
 
         keystrokes("filter: type \"" + TYPED + "\", delete it (cold JIT)", hv);
         keystrokes("filter: the same again (warm)", hv);
@@ -326,6 +336,28 @@ public final class CuratorBenchmark {
 
     private static double cpuMs(long c0) {
         return (cpu() - c0) / 1e6;
+    }
+
+    /** Process CPU, GC and JIT time at a moment, to split a wall time by who used it. */
+    private record Spent(long processCpuNanos, long gcMillis, long jitMillis) {
+        static Spent now() {
+            long gc = 0;
+            for (var b : java.lang.management.ManagementFactory.getGarbageCollectorMXBeans()) {
+                gc += Math.max(0, b.getCollectionTime());
+            }
+            var jit = java.lang.management.ManagementFactory.getCompilationMXBean();
+            var os = (com.sun.management.OperatingSystemMXBean) java.lang.management.ManagementFactory.getOperatingSystemMXBean();
+            return new Spent(os.getProcessCpuTime(), gc, jit == null ? 0 : jit.getTotalCompilationTime());
+        }
+
+        void print(String what, double wallMs, double threadCpuMs) {
+            Spent e = now();
+            double process = (e.processCpuNanos - processCpuNanos) / 1e6;
+            System.out.printf(Locale.ROOT, "    %s, where the wall went: this thread %.0f ms CPU; all threads %.0f ms CPU (GC pauses %d ms,"
+                    + " JIT compiling %d ms); waiting for a core or the disk %.0f ms (load %.1f)%n", what, threadCpuMs, process,
+                    e.gcMillis - gcMillis, e.jitMillis - jitMillis, Math.max(0, wallMs - threadCpuMs),
+                    java.lang.management.ManagementFactory.getOperatingSystemMXBean().getSystemLoadAverage());
+        }
     }
 
     private static void row(String what, double millis, String verdict) {

@@ -116,6 +116,7 @@ class HierarchyViewModelTest {
         assertTrue(vm.paste("features"));
         assertNull(vm.cutProperty().get());
         assertEquals(Set.of("features"), concept("black").broader());
+        assertEquals("black", vm.selectedIdProperty().get(), "the moved concept is selected in its new place");
         assertFalse(vm.paste("colour"), "nothing is cut any more");
     }
 

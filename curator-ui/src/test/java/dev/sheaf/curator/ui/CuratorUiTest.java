@@ -1,5 +1,7 @@
 package dev.sheaf.curator.ui;
 
+import dev.sheaf.curator.app.Screenshots;
+
 import dev.sheaf.curator.session.Caution;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
@@ -45,11 +47,6 @@ class CuratorUiTest extends WindowTestBase {
     @Start
     void start(Stage stage) throws Exception {
         showWindow(stage);
-    }
-
-    @SuppressWarnings("unchecked")
-    private TableView<CandidateRow> table(FxRobot robot) {
-        return robot.lookup("#harvest-table").queryAs(TableView.class);
     }
 
     @Test

@@ -56,11 +56,6 @@ class StructureUiTest extends WindowTestBase {
         showWindow(stage);
     }
 
-    @SuppressWarnings("unchecked")
-    private TreeView<TreeNode> tree(FxRobot robot) {
-        return robot.lookup("#hierarchy-tree").queryAs(TreeView.class);
-    }
-
     /** The visible cell showing {@code id} (under {@code parent} when not null). */
     @SuppressWarnings("unchecked")
     private Node cell(FxRobot robot, String id, String parent) {

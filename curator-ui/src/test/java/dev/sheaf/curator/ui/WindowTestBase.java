@@ -1,5 +1,7 @@
 package dev.sheaf.curator.ui;
 
+import dev.sheaf.curator.app.Screenshots;
+
 import dev.sheaf.curator.app.CuratorApp;
 import dev.sheaf.curator.app.MainView;
 import dev.sheaf.curator.app.MainViewModel;
@@ -31,6 +33,18 @@ abstract class WindowTestBase {
         view = new MainView(vm);
         CuratorApp.installPanels(view, vm);
         CuratorApp.show(stage, view, vm);
+    }
+
+    /** The harvest's candidate table. */
+    @SuppressWarnings("unchecked")
+    static javafx.scene.control.TableView<dev.sheaf.curator.harvest.CandidateRow> table(FxRobot robot) {
+        return robot.lookup("#harvest-table").queryAs(javafx.scene.control.TableView.class);
+    }
+
+    /** The vocabulary tree. */
+    @SuppressWarnings("unchecked")
+    static javafx.scene.control.TreeView<dev.sheaf.curator.hierarchy.TreeNode> tree(FxRobot robot) {
+        return robot.lookup("#hierarchy-tree").queryAs(javafx.scene.control.TreeView.class);
     }
 
     /** Waits (up to 3 minutes: the machine may be busy) for a condition, then for the FX queue to drain. */
