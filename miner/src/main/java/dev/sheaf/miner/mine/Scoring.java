@@ -33,6 +33,8 @@ final class Scoring {
     private final boolean[] letter;
     private final boolean[] number;
     private final boolean[] unit;
+    /** Per unit token: its occurrences right after a number or unit, from the counted bigrams (a lower bound). */
+    private final long[] afterNumber;
 
     /** Survivors of the filters: pool entry and rank score. */
     private int[] survivor;
@@ -60,7 +62,32 @@ final class Scoring {
             number[id] = isNumber(t);
             unit[id] = units.contains(t);
         }
+        afterNumber = new long[terms.length];
+        if (maxLevel >= 2) {
+            int[] pair = new int[2];
+            for (int i = 0; i < c.level(2).size; i++) {
+                c.tokensOf(2, i, pair);
+                // after a number, or after a unit of one ("10k mm": the k of ten thousand)
+                if ((number[pair[0]] || unit[pair[0]]) && unit[pair[1]]) {
+                    afterNumber[pair[1]] += c.tf(2, i);
+                }
+            }
+        }
     }
+
+    /**
+     * A quantity's tail (decision 052): a term of two or more words whose first word is a unit that
+     * follows a number (or a unit after one) at least {@link #QUANTITY_TAIL_SHARE} of the times it occurs ("d nylon"
+     * of "70D nylon", "mm waterproof rating" of "3000 mm waterproof rating"). The number is cut off by
+     * the n-gram's start, not by the text: the term itself ("nylon", "waterproof rating") is a
+     * candidate of its own and the quantity a spec value.
+     */
+    private boolean quantityTail(int m, int[] t) {
+        return m >= 2 && unit[t[0]] && afterNumber[t[0]] >= QUANTITY_TAIL_SHARE * c.tf(1, t[0]);
+    }
+
+    /** See {@link #quantityTail}. [practice] */
+    static final double QUANTITY_TAIL_SHARE = 0.9;
 
     private static boolean isNumber(String t) {
         if (t.isEmpty() || !Character.isDigit(t.charAt(0))) {
@@ -255,6 +282,9 @@ final class Scoring {
                 }
                 // numbers and units only ("1.2 kg", "kg", "10,000 mm"): quantities, harvested from spec values
                 if (o.dropQuantities() && allQuantity && anyUnit) {
+                    continue;
+                }
+                if (o.dropQuantities() && quantityTail(m, t)) {
                     continue;
                 }
             }

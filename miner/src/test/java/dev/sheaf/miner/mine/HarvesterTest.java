@@ -220,6 +220,31 @@ class HarvesterTest {
         assertTrue(all.contains("hollowmere traders"), all.toString());
     }
 
+    /** Decision 052: "d nylon" of "70D nylon" is a quantity's tail; "nylon" and a unit that mostly leads ("upf") stay. */
+    @Test
+    void quantityTailsAreDroppedButTheTermsAfterThemStay() {
+        List<Listing> listings = new ArrayList<>();
+        for (int i = 0; i < 30; i++) {
+            listings.add(new Listing("q" + i, "jackets", "feed.jsonl", "line " + (i + 1),
+                    List.of(Field.of(FieldKind.TITLE, "Tarn shell " + i),
+                            Field.of(FieldKind.BULLET, (i % 2 == 0 ? "70D" : "40D") + " ripstop nylon shell"),
+                            Field.of(FieldKind.BULLET, "upf 50 sun hood"),
+                            Field.of(FieldKind.TEXT, i % 3 == 0 ? "ripstop nylon keeps its shape" : "packs small"))));
+        }
+        HarvestOptions o = HarvestOptions.builder().minFrequency(2).minDf(2).limit(0).maxDfShare(1).build();
+        Set<String> terms = mine(listings, o, 2, 256L << 20).candidates().stream().map(Harvest.Candidate::term)
+                .collect(Collectors.toSet());
+        assertFalse(terms.contains("d ripstop nylon"), terms.toString());
+        assertFalse(terms.contains("d ripstop"), terms.toString());
+        assertTrue(terms.contains("ripstop nylon"), terms.toString());
+        assertTrue(terms.contains("ripstop nylon shell"), terms.toString());
+        assertTrue(terms.contains("sun hood"), terms.toString());
+        Set<String> kept = mine(listings, HarvestOptions.builder().minFrequency(2).minDf(2).limit(0).maxDfShare(1)
+                .dropQuantities(false).build(), 1, 256L << 20).candidates().stream().map(Harvest.Candidate::term)
+                .collect(Collectors.toSet());
+        assertTrue(kept.contains("d ripstop nylon"), kept.toString());
+    }
+
     /** Decision 051: a term seen (nearly) only as a whole section heading is a part of the page, not an attribute. */
     @Test
     void sectionHeadingsAreDroppedButAttributesThatAreAlsoHeadingsStay() {
