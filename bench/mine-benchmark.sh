@@ -29,10 +29,6 @@ bench_classpath miner
 # (they depend on its size: the quick compiler only below 100 MB), so both Java rows compare alike
 launcher_opts() { SHEAF_JAVA_OPTS= SHEAF_JAVA_EXTRA= SHEAF_SHOW_JAVA_OPTS=1 "$ROOT/sheaf" mine "$1"; }
 
-# The ingest stage decides how sheaf mine is run: through the launcher once it exists, else through
-# the benchmark driver with a test-only JSONL reader (same Harvester, same outputs).
-if [ -f "$ROOT/miner/src/main/java/dev/sheaf/miner/ingest/Ingest.java" ]; then INGEST=1; else INGEST=0; fi
-
 HAVE_NLTK=0; "$PY" -c "import nltk.collocations" 2>/dev/null && HAVE_NLTK=1
 HAVE_SKLEARN=0; "$PY" -c "import sklearn.feature_extraction.text" 2>/dev/null && HAVE_SKLEARN=1
 
@@ -97,7 +93,7 @@ skip_peer() { # key size -> 0 when it should be skipped (prints why)
 WARM=0
 for n in "${SIZES[@]}"; do
   f="$(corpus "$n")"
-  if [ "$INGEST" = 1 ] && [ "$WARM" = 0 ]; then warmup "$f"; WARM=1; fi
+  if [ "$WARM" = 0 ]; then warmup "$f"; WARM=1; fi
   if [ -d "$f" ]; then bytes=$(du -sb "$f" | cut -f1); else bytes=$(stat -L -c %s "$f"); fi
   read -r -a LOPTS <<< "$(launcher_opts "$f")"
   echo "$n: JVM flags of the Java rows: ${LOPTS[*]}" >&2
@@ -115,13 +111,7 @@ for n in "${SIZES[@]}"; do
     measure analysis "$n" "$bytes" "analysis only (Java)" java "${LOPTS[@]}" "$HEAP" ${JOPTS[@]+"${JOPTS[@]}"} -cp "$CP" dev.sheaf.miner.bench.BenchMain analysis-only "$f"
   fi
   # 3. the whole job
-  if [ "$INGEST" = 1 ]; then
-    NOTE="./sheaf mine" measure sheaf "$n" "$bytes" "sheaf mine" env SHEAF_JAVA_EXTRA="$HEAP ${BENCH_JAVA_OPTS:-}" "$ROOT/sheaf" mine "$f" --out "$WORK/out-$n" --no-progress
-  elif [ "$FORMAT" = jsonl ]; then
-    NOTE="Harvester + test JSONL reader" measure sheaf "$n" "$bytes" "sheaf mine" java "${LOPTS[@]}" "$HEAP" ${JOPTS[@]+"${JOPTS[@]}"} -cp "$CP" dev.sheaf.miner.bench.BenchMain mine "$f" "$WORK/out-$n"
-  else
-    printf '%-9s %-24s %s\n' "$n" "sheaf mine" "skipped: folder corpora need the ingest stage"
-  fi
+  NOTE="./sheaf mine" measure sheaf "$n" "$bytes" "sheaf mine" env SHEAF_JAVA_EXTRA="$HEAP ${BENCH_JAVA_OPTS:-}" "$ROOT/sheaf" mine "$f" --out "$WORK/out-$n" --no-progress
   # 4. peers (JSONL only)
   if [ "$FORMAT" = jsonl ]; then
     if [ "$HAVE_NLTK" = 1 ]; then

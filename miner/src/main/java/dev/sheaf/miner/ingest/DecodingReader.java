@@ -35,10 +35,6 @@ final class DecodingReader extends Reader {
      * @param in       the stream, positioned after any byte-order mark
      * @param byteBase how many bytes precede the stream's start in the file (the BOM length), for positions
      */
-    DecodingReader(InputStream in, Charset charset, long byteBase) {
-        this(in, charset, byteBase, 1 << 16);
-    }
-
     /**
      * @param sizeHint how many bytes the stream holds, if known: buffers are sized to it (between 4
      *                 and 64 kB), so a folder of small pages does not allocate 128 kB for each page

@@ -47,6 +47,12 @@ public record HarvestOptions(int ngramMax, int minFrequency, int minDf, double m
      * of the page, not of the product, and is dropped unless {@code dropHeadings} is off. [practice]
      */
     public static final double HEADING_SHARE = 0.9;
+    /**
+     * Quantity tails (decision 052): with {@code dropQuantities}, a term of two or more words whose
+     * first word is a unit that follows a number (or a unit after one) at least this share of the
+     * times it occurs ("d nylon" of "70D nylon") is dropped. [practice]
+     */
+    public static final double QUANTITY_TAIL_SHARE = 0.9;
 
     public HarvestOptions {
         Objects.requireNonNull(rankBy, "rankBy");

@@ -1,7 +1,7 @@
 package dev.sheaf.miner.mine;
 
+import dev.sheaf.vocab.io.AtomicFiles;
 import java.io.IOException;
-import java.io.UncheckedIOException;
 import java.nio.channels.FileChannel;
 import java.nio.channels.FileLock;
 import java.nio.channels.OverlappingFileLockException;
@@ -13,8 +13,6 @@ import java.nio.file.StandardOpenOption;
 import java.nio.file.attribute.FileTime;
 import java.time.Duration;
 import java.time.Instant;
-import java.util.Comparator;
-import java.util.stream.Stream;
 
 /**
  * A mining run's temporary folder ({@code sheaf-mine-*} under the temp root: token stores, text
@@ -99,9 +97,9 @@ final class RunFolder implements AutoCloseable {
     }
 
     private static void delete(Path d) {
-        try (Stream<Path> s = Files.walk(d)) {
-            s.sorted(Comparator.reverseOrder()).forEach(p -> p.toFile().delete());
-        } catch (IOException | UncheckedIOException e) {
+        try {
+            AtomicFiles.deleteTree(d);
+        } catch (IOException e) {
             // best effort: what is left is swept by a later run
         }
     }

@@ -63,7 +63,7 @@ final class Scoring {
             unit[id] = units.contains(t);
         }
         afterNumber = new long[terms.length];
-        if (maxLevel >= 2) {
+        if (maxLevel >= 2 && o.dropQuantities()) {
             int[] pair = new int[2];
             for (int i = 0; i < c.level(2).size; i++) {
                 c.tokensOf(2, i, pair);
@@ -77,17 +77,14 @@ final class Scoring {
 
     /**
      * A quantity's tail (decision 052): a term of two or more words whose first word is a unit that
-     * follows a number (or a unit after one) at least {@link #QUANTITY_TAIL_SHARE} of the times it occurs ("d nylon"
+     * follows a number (or a unit after one) at least {@link HarvestOptions#QUANTITY_TAIL_SHARE} of the times it occurs ("d nylon"
      * of "70D nylon", "mm waterproof rating" of "3000 mm waterproof rating"). The number is cut off by
      * the n-gram's start, not by the text: the term itself ("nylon", "waterproof rating") is a
      * candidate of its own and the quantity a spec value.
      */
     private boolean quantityTail(int m, int[] t) {
-        return m >= 2 && unit[t[0]] && afterNumber[t[0]] >= QUANTITY_TAIL_SHARE * c.tf(1, t[0]);
+        return m >= 2 && unit[t[0]] && afterNumber[t[0]] >= HarvestOptions.QUANTITY_TAIL_SHARE * c.tf(1, t[0]);
     }
-
-    /** See {@link #quantityTail}. [practice] */
-    static final double QUANTITY_TAIL_SHARE = 0.9;
 
     private static boolean isNumber(String t) {
         if (t.isEmpty() || !Character.isDigit(t.charAt(0))) {

@@ -3,14 +3,9 @@ package dev.sheaf.miner.bench;
 import dev.sheaf.miner.ingest.Ingest;
 import dev.sheaf.miner.ingest.Listing;
 import dev.sheaf.miner.ingest.SourceSpec;
-import dev.sheaf.miner.mine.Harvest;
-import dev.sheaf.miner.mine.HarvestFiles;
-import dev.sheaf.miner.mine.HarvestOptions;
-import dev.sheaf.miner.mine.Harvester;
 import dev.sheaf.miner.text.Analysis;
 import dev.sheaf.miner.text.AnalysisProfile;
 import dev.sheaf.miner.text.Segmenter;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -18,11 +13,10 @@ import java.util.concurrent.ArrayBlockingQueue;
 import java.util.concurrent.atomic.AtomicLong;
 
 /**
- * Benchmark driver (test scope, used by bench/mine-benchmark.sh until ingest is merged):
- * {@code mine FILE.jsonl OUTDIR [threads]} — the whole harvest, written like sheaf mine writes it;
- * {@code analysis-only FILE.jsonl [threads]} — the same reading (the ingest stage, as sheaf mine
- * reads) and the same Lucene analysis over the same threads, with no counting: the floor that
- * mining is measured against.
+ * The floors of bench/mine-benchmark.sh (test scope; the whole job is timed through ./sheaf mine):
+ * {@code read-only|tokenizer-only|analysis-only FILE [threads]} — the same reading (the ingest stage,
+ * as sheaf mine reads) and, for the last two, Lucene's tokenizer alone or the profile's whole analysis
+ * over the same threads, with no counting: what mining is measured against.
  */
 public final class BenchMain {
     private BenchMain() {
@@ -32,45 +26,12 @@ public final class BenchMain {
         String mode = args[0];
         Path file = Path.of(args[1]);
         long t0 = System.nanoTime();
-        if (mode.equals("mine")) {
-            Path out = Path.of(args[2]);
-            int threads = args.length > 3 ? Integer.parseInt(args[3]) : Runtime.getRuntime().availableProcessors();
-            long[] phaseStart = {System.nanoTime()};
-            long[] cpuStart = {cpu()};
-            String[] phase = {"startup"};
-            Harvester h = Harvester.builder().options(HarvestOptions.defaults()).threads(threads)
-                    .sources(List.of(file.getFileName().toString()))
-                    .progress(name -> {
-                        long now = System.nanoTime();
-                        long c = cpu();
-                        System.err.printf("  %-18s %6.2f s wall %6.2f s cpu%n", phase[0], (now - phaseStart[0]) / 1e9, (c - cpuStart[0]) / 1e9);
-                        phase[0] = name;
-                        phaseStart[0] = now;
-                        cpuStart[0] = c;
-                    }).build();
-            Harvest harvest;
-            try (Harvester.Run run = h.start()) {
-                JsonlListings.read(file, file.getFileName().toString(), run, System.err::println);
-                harvest = run.finish();
-            }
-            long now = System.nanoTime();
-            long c = cpu();
-            System.err.printf("  %-18s %6.2f s wall %6.2f s cpu%n", phase[0], (now - phaseStart[0]) / 1e9, (c - cpuStart[0]) / 1e9);
-            phase[0] = "writing files";
-            phaseStart[0] = now;
-            cpuStart[0] = c;
-            Files.createDirectories(out);
-            HarvestFiles.write(harvest, out);
-            System.err.printf("  %-18s %6.2f s wall %6.2f s cpu%n", phase[0], (System.nanoTime() - phaseStart[0]) / 1e9,
-                    (cpu() - cpuStart[0]) / 1e9);
-            System.err.printf("mine: %d listings, %d tokens, %d candidates in %.2f s wall, %.2f s cpu%n", harvest.corpus().listings(),
-                    harvest.corpus().tokens(), harvest.candidates().size(), (System.nanoTime() - t0) / 1e9, cpu() / 1e9);
-        } else if (mode.equals("analysis-only") || mode.equals("tokenizer-only") || mode.equals("read-only")) {
+        if (mode.equals("analysis-only") || mode.equals("tokenizer-only") || mode.equals("read-only")) {
             int threads = args.length > 2 ? Integer.parseInt(args[2]) : Runtime.getRuntime().availableProcessors();
             long tokens = floor(file, threads, mode);
             System.err.printf("%s: %d tokens in %.2f s wall, %.2f s cpu%n", mode, tokens, (System.nanoTime() - t0) / 1e9, cpu() / 1e9);
         } else {
-            throw new IllegalArgumentException("mode must be mine, analysis-only, tokenizer-only or read-only");
+            throw new IllegalArgumentException("mode must be analysis-only, tokenizer-only or read-only");
         }
     }
 

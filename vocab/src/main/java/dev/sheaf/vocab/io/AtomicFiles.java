@@ -171,7 +171,7 @@ public final class AtomicFiles {
     }
 
     /** Deletes a folder we made and everything in it, links themselves and not what they point at; a missing folder is fine. */
-    static void deleteTree(Path root) throws IOException {
+    public static void deleteTree(Path root) throws IOException {
         if (!Files.exists(root, java.nio.file.LinkOption.NOFOLLOW_LINKS)) {
             return;
         }
