@@ -3,7 +3,7 @@
 #   bench/label-benchmark.sh                 1,000,000 generated listings (JSONL)
 #   bench/label-benchmark.sh 100000          another size
 # Environment: BENCH_CORPORA (default bench/corpora, git-ignored; listings-N.jsonl there is reused),
-# BENCH_CORPUS (a JSONL file to use instead), BENCH_HEAP (default -Xmx4g: the corpus is held in memory so
+# BENCH_CORPUS (a JSONL file to use instead), BENCH_HARVEST (the folder of its harvest, default beside the corpus), BENCH_HEAP (default -Xmx4g: the corpus is held in memory so
 # that every pass reads the same listings), BENCH_ARGS (more LabelBenchmark options, e.g.
 # "--regex-sample 2000 --threads 2"). See bench/README-label.md.
 set -euo pipefail
@@ -32,9 +32,17 @@ if [ ! -s "$CORPUS" ]; then
   fi
 fi
 
+# the vocabulary comes from the corpus's harvest (issue 5): sheaf mine, every candidate kept, cached beside the corpus
+HARVEST="${BENCH_HARVEST:-${CORPUS%.jsonl}.harvest}"
+if [ ! -s "$HARVEST/harvest.json" ] || [ "$HARVEST/harvest.json" -ot "$CORPUS" ]; then
+  echo "label-benchmark: mining $CORPUS into $HARVEST (sheaf mine --limit 0) ..." >&2
+  "$ROOT/sheaf" mine "$CORPUS" --limit 0 --no-progress --out "$HARVEST" >"$WORK/mine.log" 2>&1 \
+    || { tail -n 20 "$WORK/mine.log" >&2; die "sheaf mine failed"; }
+fi
+
 # shellcheck disable=SC2086
 /usr/bin/time -f "%e %M %U %S" -o "$WORK/time" java "$HEAP" -cp "$CP" dev.sheaf.miner.label.LabelBenchmark \
-    --corpus "$CORPUS" ${BENCH_ARGS:-}
+    --corpus "$CORPUS" --harvest "$HARVEST/harvest.json" ${BENCH_ARGS:-}
 read -r wall rss user sys < <(tail -n 1 "$WORK/time")
 awk -v w="$wall" -v r="$rss" -v u="$user" -v s="$sys" \
   'BEGIN { printf "whole run   %.1f s wall, %.1f CPU s, peak RSS %.0f MB (/usr/bin/time; the corpus is held in memory)\n", w, u+s, r/1024 }'

@@ -27,6 +27,7 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
 import java.util.Random;
+import java.util.Set;
 import java.util.concurrent.ForkJoinPool;
 import java.util.concurrent.atomic.AtomicLong;
 import java.util.function.ToLongFunction;
@@ -43,7 +44,7 @@ import java.util.stream.IntStream;
  *
  * <pre>
  * LabelBenchmark --corpus FILE.jsonl [--concepts 5000] [--labels 20000] [--vocab-sample 200000]
- *                [--regex-sample 5000] [--threads N] [--rounds 2]
+ *                [--regex-sample 5000] [--threads N] [--rounds 2] [--harvest harvest.json] [--digest]
  * LabelBenchmark --synthetic N --out FILE.jsonl      (when the corpus generator is not available)
  * </pre>
  */
@@ -61,6 +62,9 @@ public final class LabelBenchmark {
         int regexSample = 5000;
         int threads = Runtime.getRuntime().availableProcessors();
         int rounds = 2;
+        Path harvest = null;
+        boolean digest = false;
+        Set<String> passes = new java.util.LinkedHashSet<>(PASSES);
         for (int i = 0; i < args.length; i++) {
             switch (args[i]) {
                 case "--corpus" -> corpus = Path.of(args[++i]);
@@ -72,6 +76,9 @@ public final class LabelBenchmark {
                 case "--regex-sample" -> regexSample = Integer.parseInt(args[++i]);
                 case "--threads" -> threads = Integer.parseInt(args[++i]);
                 case "--rounds" -> rounds = Integer.parseInt(args[++i]);
+                case "--harvest" -> harvest = Path.of(args[++i]);
+                case "--digest" -> digest = true;
+                case "--passes" -> passes = passes(args[++i]);
                 default -> throw new IllegalArgumentException("unknown argument " + args[i]);
             }
         }
@@ -100,17 +107,30 @@ public final class LabelBenchmark {
 
         Analysis analysis = Analysis.of(AnalysisProfile.defaults());
         t0 = System.nanoTime();
-        List<String> grams = frequentNgrams(analysis, all.subList(0, Math.min(vocabSample, all.size())), labels);
+        List<String> grams = harvest != null ? harvestTerms(harvest, labels)
+                : frequentNgrams(analysis, all.subList(0, Math.min(vocabSample, all.size())), labels);
+        String from = harvest != null ? String.format(Locale.ROOT, "the %,d best-ranked candidates of the harvest %s", grams.size(), harvest)
+                : String.format(Locale.ROOT, "the %,d most frequent 1-3-grams of %,d listings", grams.size(), Math.min(vocabSample, all.size()));
         Vocabulary vocab = vocabulary(grams, concepts);
         double vocabSecs = secs(t0);
         t0 = System.nanoTime();
         Labeler labeler = Labeler.of(vocab, analysis);
         double compileSecs = secs(t0);
-        System.out.printf(Locale.ROOT, "vocabulary  %,d concepts in %d facets, %,d labels from the %,d most frequent 1-3-grams of %,d listings "
+        System.out.printf(Locale.ROOT, "vocabulary  %,d concepts in %d facets, %,d labels from %s "
                         + "(%.1f s) + 2 number facets; compiled in %.2f s (%,d labels in the matcher, %d notes)%n",
-                vocab.concepts().size(), vocab.facets().size() - 2, grams.size(), grams.size(), Math.min(vocabSample, all.size()),
+                vocab.concepts().size(), vocab.facets().size() - 2, grams.size(), from,
                 vocabSecs, compileSecs, labeler.labelsCompiled(), labeler.notes().size());
 
+        if (digest) {
+            // a fingerprint of every assignment of every listing, to show that a speed change changed no output
+            java.security.MessageDigest md = java.security.MessageDigest.getInstance("SHA-256");
+            for (Listing l : all) {
+                md.update(labeler.label(l).toString().getBytes(StandardCharsets.UTF_8));
+            }
+            System.out.printf(Locale.ROOT, "digest      SHA-256 of every Assignments of %,d listings: %s%n", all.size(),
+                    java.util.HexFormat.of().formatHex(md.digest()));
+            return;
+        }
         ForkJoinPool pool = new ForkJoinPool(threads);
         List<Listing> regexListings = all.subList(0, Math.min(regexSample, all.size()));
         long regexBytes = 0;
@@ -122,19 +142,30 @@ public final class LabelBenchmark {
         double regexCompile = secs(t0);
 
         Result an = null;
+        Result anLab = null;
+        Result qty = null;
         Result lab = null;
         Result re = null;
         // one segmenter per thread for every round, as the labeler keeps one per thread: a fresh one each
         // round would start with an empty term cache and make the floor slower than it is
         ThreadLocal<Segmenter> segs = ThreadLocal.withInitial(analysis::newSegmenter);
+        // the token stream the labeler matches on: the same profile with stop and negation words kept as tokens
+        Analysis labelingTokens = Analysis.of(Labeler.labelingProfile(analysis.profile()));
+        ThreadLocal<Segmenter> labSegs = ThreadLocal.withInitial(labelingTokens::newSegmenter);
         for (int round = 0; round < rounds; round++) { // the first round warms the JIT
-            an = time(pool, all, l -> {
+            an = !passes.contains("analysis") ? null : time(pool, all, l -> {
                 long[] n = {0};
                 segs.get().analyze(l, (f, p, ids, st, en, len) -> n[0] += len);
                 return n[0];
             });
-            lab = time(pool, all, l -> labeler.label(l).assignments().size());
-            re = time(pool, regexListings, l -> {
+            anLab = !passes.contains("tokens") ? null : time(pool, all, l -> {
+                long[] n = {0};
+                labSegs.get().analyze(l, (f, p, ids, st, en, len) -> n[0] += len);
+                return n[0];
+            });
+            lab = !passes.contains("labeling") ? null : time(pool, all, l -> labeler.label(l).assignments().size());
+            qty = !passes.contains("quantities") ? null : time(pool, all, LabelBenchmark::quantities);
+            re = !passes.contains("regex") ? null : time(pool, regexListings, l -> {
                 long n = 0;
                 Matcher m = regex.matcher("");
                 for (Field f : l.fields()) {
@@ -160,19 +191,53 @@ public final class LabelBenchmark {
         System.out.printf(Locale.ROOT, "%-34s %12s %14s %10s %10s %12s %12s %12s%n", "pass", "listings", "listings/s", "MB/s", "CPU s",
                 "MB/CPU-s", "worker CPU s", "output");
         row("analysis only (miner's Analysis)", all.size(), textBytes, an, "tokens");
+        row("  same, stop words kept (labeler's)", all.size(), textBytes, anLab, "tokens");
+        row("quantity reading only", all.size(), textBytes, qty, "quantities");
         row("labeling (Labeler.label)", all.size(), textBytes, lab, "assignments");
         row("regex alternation (sample)", regexListings.size(), regexBytes, re, "matches");
         System.out.println();
-        double overAnalysis = lab.cpu / an.cpu;
-        double overAnalysisWall = lab.wall / an.wall;
-        double regexRate = regexBytes / re.cpu;
-        double labRate = textBytes / lab.cpu;
-        System.out.printf(Locale.ROOT, "labeling / analysis-only: %.2fx CPU time, %.2fx worker CPU time, %.2fx wall time (target <= 1.5x)%n",
-                overAnalysis, lab.work / an.work, overAnalysisWall);
-        System.out.printf(Locale.ROOT, "labeling vs regex baseline: %.0fx faster per CPU-second, %.0fx per wall-second (target >= 10x); "
-                + "regex compiled in %.2f s%n", labRate / regexRate, (textBytes / lab.wall) / (regexBytes / re.wall), regexCompile);
+        report(an, anLab, qty, lab, re, textBytes, regexBytes, all.size(), regexCompile);
         System.out.printf(Locale.ROOT, "peak RSS    %,d MB (whole JVM, corpus held in memory); peak heap after GC %,d MB%n",
                 peakRssKb() >> 10, peakHeap() >> 20);
+    }
+
+    /** The passes, in the order each round runs them. */
+    static final List<String> PASSES = List.of("analysis", "tokens", "labeling", "quantities", "regex");
+
+    private static Set<String> passes(String list) {
+        Set<String> out = new java.util.LinkedHashSet<>();
+        for (String p : list.split(",")) {
+            if (!PASSES.contains(p.strip())) {
+                throw new IllegalArgumentException("unknown pass \"" + p + "\"; passes are " + String.join(", ", PASSES));
+            }
+            out.add(p.strip());
+        }
+        return out;
+    }
+
+    /** The comparisons whose passes ran. */
+    private static void report(Result an, Result anLab, Result qty, Result lab, Result re, long textBytes, long regexBytes, int listings,
+                               double regexCompile) {
+        if (lab == null) {
+            return;
+        }
+        if (an != null) {
+            System.out.printf(Locale.ROOT, "labeling / analysis-only: %.2fx CPU time, %.2fx worker CPU time, %.2fx wall time (target <= 1.5x)%n",
+                    lab.cpu / an.cpu, lab.work / an.work, lab.wall / an.wall);
+        }
+        if (anLab != null) {
+            System.out.printf(Locale.ROOT, "labeling / the labeler's own token stream: %.2fx CPU time (matching, negation, numbers and output "
+                    + "over the analysis it cannot skip); %.1f assignments a listing%n", lab.cpu / anLab.cpu, (double) lab.output / listings);
+        }
+        if (an != null && anLab != null && qty != null) {
+            System.out.printf(Locale.ROOT, "floor of labeling: its token stream plus the quantity reading alone = %.2fx the analysis-only CPU "
+                    + "time%n", (anLab.cpu + qty.cpu) / an.cpu);
+        }
+        if (re != null) {
+            System.out.printf(Locale.ROOT, "labeling vs regex baseline: %.0fx faster per CPU-second, %.0fx per wall-second (target >= 10x); "
+                    + "regex compiled in %.2f s%n", (textBytes / lab.cpu) / (regexBytes / re.cpu), (textBytes / lab.wall) / (regexBytes / re.wall),
+                    regexCompile);
+        }
     }
 
     /**
@@ -205,6 +270,10 @@ public final class LabelBenchmark {
     }
 
     private static void row(String name, long n, long bytes, Result r, String what) {
+        if (r == null) {
+            System.out.printf(Locale.ROOT, "%-34s %12s%n", name, "not run");
+            return;
+        }
         System.out.printf(Locale.ROOT, "%-34s %,12d %,14.0f %10.2f %10.2f %12.2f %12.2f %,12d %s%n", name, n, n / r.wall,
                 bytes / 1e6 / r.wall, r.cpu, bytes / 1e6 / r.cpu, r.work, r.output, what);
     }
@@ -228,6 +297,47 @@ public final class LabelBenchmark {
             b += f.text().getBytes(StandardCharsets.UTF_8).length + f.key().getBytes(StandardCharsets.UTF_8).length;
         }
         return b;
+    }
+
+    /**
+     * The quantity reading a labeler with number facets cannot skip, alone: every spec value read
+     * whole (under its key) and every other text with a digit scanned for quantities.
+     */
+    private static long quantities(Listing l) {
+        long n = 0;
+        for (Field f : l.fields()) {
+            String t = f.text();
+            if (!hasDigit(t)) {
+                continue;
+            }
+            if (f.kind() == FieldKind.SPEC) {
+                n += dev.sheaf.miner.text.Quantities.parse(f.key(), t).isPresent() ? 1 : 0;
+            } else {
+                n += dev.sheaf.miner.text.Quantities.find(t).size();
+            }
+        }
+        return n;
+    }
+
+    private static boolean hasDigit(String s) {
+        for (int i = 0; i < s.length(); i++) {
+            if (Character.isDigit(s.charAt(i))) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /** The {@code limit} best-ranked candidate terms of a harvest ({@code sheaf mine}'s harvest.json), in rank order. */
+    static List<String> harvestTerms(Path harvestJson, int limit) throws IOException {
+        List<String> out = new ArrayList<>();
+        for (dev.sheaf.miner.mine.Harvest.Candidate c : dev.sheaf.miner.mine.HarvestFiles.readJson(harvestJson).candidates()) {
+            if (out.size() == limit) {
+                break;
+            }
+            out.add(c.term());
+        }
+        return out;
     }
 
     /** The {@code limit} most frequent 1-, 2- and 3-grams of the miner's segments (no numbers), most frequent first. */
