@@ -22,9 +22,9 @@ import java.util.Map;
  * file is written atomically and every CSV through {@link SafeCsv}.
  */
 final class LabelExports {
-    private static final Integer STATED = 1;
-    private static final Integer ABSENT = 0;
-    private static final Integer NEGATED = -1;
+    private static final int STATED = 1;
+    private static final int ABSENT = 0;
+    private static final int NEGATED = -1;
     private static final List<String> ROW_HEAD = List.of("id", "category", "source");
 
     private LabelExports() {
@@ -43,20 +43,21 @@ final class LabelExports {
             List<Object> head = new ArrayList<>(ROW_HEAD);
             head.addAll(cols.headers);
             csv.row(head);
-            Object[] cells = new Object[3 + cols.size()];
+            Object[] head3 = new Object[3];
+            int[] cells = new int[cols.size()];
             for (LabelRow r : rows) {
-                cells[0] = r.id();
-                cells[1] = r.category();
-                cells[2] = r.source();
-                Arrays.fill(cells, 3, cells.length, ABSENT);
+                head3[0] = r.id();
+                head3[1] = r.category();
+                head3[2] = r.source();
+                Arrays.fill(cells, ABSENT);
                 for (int code : r.codes()) {
                     int c = code >>> 1;
                     boolean negated = (code & 1) == 1;
-                    if (!negated || cells[3 + c] != STATED) {
-                        cells[3 + c] = negated ? NEGATED : STATED;
+                    if (!negated || cells[c] != STATED) {
+                        cells[c] = negated ? NEGATED : STATED;
                     }
                 }
-                csv.row(cells);
+                csv.row(head3, cells);
             }
             csv.flush();
         });

@@ -133,7 +133,9 @@ public final class AtomicFiles {
     /** Writes UTF-8 text atomically. */
     public static void writeText(Path target, TextBody body) throws IOException {
         write(target, out -> {
-            Writer w = new java.io.OutputStreamWriter(out, StandardCharsets.UTF_8);
+            // buffered on the char side: the encoder wraps every write call, so a table written cell by cell
+            // (labels.csv: millions of one-character cells) spent most of its time there
+            Writer w = new java.io.BufferedWriter(new java.io.OutputStreamWriter(out, StandardCharsets.UTF_8), 1 << 16);
             body.write(w);
             w.flush();
         });

@@ -24,6 +24,7 @@ public final class SafeCsv implements AutoCloseable {
     private static final CSVFormat QUOTED = FORMAT.builder().setQuoteMode(QuoteMode.ALL).get();
 
     private final Writer out;
+    private final StringBuilder numberTail = new StringBuilder();
 
     public SafeCsv(Writer out) {
         this.out = out;
@@ -31,13 +32,37 @@ public final class SafeCsv implements AutoCloseable {
 
     /** Writes one record; {@link Number} cells pass through, everything else is neutralised. */
     public void row(Object... cells) throws IOException {
+        cells(cells);
+        out.write(FORMAT.getRecordSeparator());
+    }
+
+    /**
+     * Writes one record: the {@code cells} as {@link #row(Object...)} writes them, then every int of
+     * {@code numbers}. An integer never needs quoting or neutralising, so a wide numeric table (a
+     * multi-hot label matrix: millions of 0/1/-1 cells) is written straight to the output.
+     */
+    public void row(Object[] cells, int[] numbers) throws IOException {
+        cells(cells);
+        StringBuilder tail = numberTail;
+        tail.setLength(0);
+        String delimiter = FORMAT.getDelimiterString();
+        for (int i = 0; i < numbers.length; i++) {
+            if (i > 0 || cells.length > 0) {
+                tail.append(delimiter);
+            }
+            tail.append(numbers[i]);
+        }
+        tail.append(FORMAT.getRecordSeparator());
+        out.append(tail); // one write a record, not one a cell
+    }
+
+    private void cells(Object[] cells) throws IOException {
         boolean first = true;
         for (Object c : cells) {
             boolean neutralised = !(c instanceof Number) && c != null && needsPrefix(c.toString());
             (neutralised ? QUOTED : FORMAT).print(cell(c), out, first);
             first = false;
         }
-        out.write(FORMAT.getRecordSeparator());
     }
 
     /** Writes one record from a list. */
