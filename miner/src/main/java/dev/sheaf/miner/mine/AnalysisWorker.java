@@ -166,7 +166,6 @@ final class AnalysisWorker implements SegmentSink {
 
     void seal() {
         store.seal();
-        spill.seal();
     }
 
     void close() {

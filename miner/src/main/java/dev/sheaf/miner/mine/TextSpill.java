@@ -3,15 +3,13 @@ package dev.sheaf.miner.mine;
 import dev.sheaf.miner.ingest.Field;
 import dev.sheaf.miner.ingest.FieldKind;
 import dev.sheaf.miner.ingest.Listing;
+import dev.sheaf.vocab.io.SpillFile;
 import it.unimi.dsi.fastutil.longs.LongArrayList;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.ByteBuffer;
-import java.nio.channels.FileChannel;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardOpenOption;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -23,19 +21,14 @@ import java.util.List;
 final class TextSpill implements AutoCloseable {
     private static final FieldKind[] KINDS = FieldKind.values();
 
-    private final Path file;
-    private final FileChannel channel;
-    private final ByteBuffer out = ByteBuffer.allocate(1 << 16);
+    private final SpillFile spill;
     private final LongArrayList offsets = new LongArrayList();
-    private long size;
     private byte[] record = new byte[4096];
     private int recordLen;
 
     TextSpill(Path file) {
-        this.file = file;
         try {
-            this.channel = FileChannel.open(file, StandardOpenOption.CREATE, StandardOpenOption.TRUNCATE_EXISTING,
-                    StandardOpenOption.WRITE, StandardOpenOption.READ);
+            this.spill = SpillFile.create(file);
         } catch (IOException e) {
             throw new UncheckedIOException("cannot create the temporary text file " + file + " (" + e.getMessage()
                     + "); give a writable temp folder", e);
@@ -79,38 +72,11 @@ final class TextSpill implements AutoCloseable {
                 prevEnd = end;
             }
         }
-        this.offsets.add(size);
-        size += recordLen;
         try {
-            int p = 0;
-            while (p < recordLen) {
-                int n = Math.min(out.remaining(), recordLen - p);
-                out.put(record, p, n);
-                p += n;
-                if (!out.hasRemaining()) {
-                    flushBuffer();
-                }
-            }
+            this.offsets.add(spill.append(record, 0, recordLen));
         } catch (IOException e) {
-            throw new UncheckedIOException("cannot write the temporary text file " + file + " (" + e.getMessage()
+            throw new UncheckedIOException("cannot write the temporary text file " + spill.path() + " (" + e.getMessage()
                     + "); free disk space or give another temp folder", e);
-        }
-    }
-
-    private void flushBuffer() throws IOException {
-        out.flip();
-        while (out.hasRemaining()) {
-            channel.write(out, channel.size());
-        }
-        out.clear();
-    }
-
-    /** Makes everything written readable. */
-    void seal() {
-        try {
-            flushBuffer();
-        } catch (IOException e) {
-            throw new UncheckedIOException("cannot write the temporary text file " + file, e);
         }
     }
 
@@ -121,16 +87,12 @@ final class TextSpill implements AutoCloseable {
     /** Reads back listing {@code index}; {@code sources} maps source ids to names. */
     Stored read(int index, String[] sources) {
         long from = offsets.getLong(index);
-        long to = index + 1 < offsets.size() ? offsets.getLong(index + 1) : size;
+        long to = index + 1 < offsets.size() ? offsets.getLong(index + 1) : spill.size();
         ByteBuffer b = ByteBuffer.allocate((int) (to - from));
         try {
-            while (b.hasRemaining()) {
-                if (channel.read(b, from + b.position()) < 0) {
-                    throw new IOException("unexpected end of file");
-                }
-            }
+            spill.read(from, b);
         } catch (IOException e) {
-            throw new UncheckedIOException("cannot read the temporary text file " + file, e);
+            throw new UncheckedIOException("cannot read the temporary text file " + spill.path(), e);
         }
         b.flip();
         String id = getString(b);
@@ -229,8 +191,7 @@ final class TextSpill implements AutoCloseable {
     @Override
     public void close() {
         try {
-            channel.close();
-            Files.deleteIfExists(file);
+            spill.close();
         } catch (IOException ignored) {
             // the temp folder is removed as a whole afterwards
         }

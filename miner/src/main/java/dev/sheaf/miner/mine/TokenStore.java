@@ -1,12 +1,10 @@
 package dev.sheaf.miner.mine;
 
+import dev.sheaf.vocab.io.SpillFile;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.ByteBuffer;
-import java.nio.channels.FileChannel;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardOpenOption;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
@@ -24,8 +22,7 @@ final class TokenStore implements AutoCloseable {
 
     private final long residentBudget;
     private final Path spillFile;
-    private FileChannel spill;
-    private long spillSize;
+    private SpillFile spill;
 
     private final List<byte[]> blocks = new ArrayList<>();
     private final List<Integer> used = new ArrayList<>();
@@ -82,7 +79,7 @@ final class TokenStore implements AutoCloseable {
     }
 
     boolean spilled() {
-        return spillSize > 0;
+        return spill != null && spill.size() > 0;
     }
 
     private void put(int v) {
@@ -118,15 +115,9 @@ final class TokenStore implements AutoCloseable {
             if (b != null) {
                 try {
                     if (spill == null) {
-                        spill = FileChannel.open(spillFile, StandardOpenOption.CREATE, StandardOpenOption.WRITE,
-                                StandardOpenOption.READ, StandardOpenOption.TRUNCATE_EXISTING);
+                        spill = SpillFile.create(spillFile);
                     }
-                    ByteBuffer buf = ByteBuffer.wrap(b, 0, used.get(i));
-                    long at = spillSize;
-                    while (buf.hasRemaining()) {
-                        spillSize += spill.write(buf, spillSize);
-                    }
-                    fileOffsets.set(i, at);
+                    fileOffsets.set(i, spill.append(b, 0, used.get(i)));
                     blocks.set(i, null);
                     resident -= b.length;
                     return true;
@@ -162,14 +153,7 @@ final class TokenStore implements AutoCloseable {
                     readBuf = new byte[Math.max(len, BLOCK)];
                 }
                 try {
-                    ByteBuffer buf = ByteBuffer.wrap(readBuf, 0, len);
-                    long at = fileOffsets.get(bi);
-                    while (buf.hasRemaining()) {
-                        int r = spill.read(buf, at + buf.position());
-                        if (r < 0) {
-                            throw new IOException("unexpected end of spill file");
-                        }
-                    }
+                    spill.read(fileOffsets.get(bi), ByteBuffer.wrap(readBuf, 0, len));
                 } catch (IOException e) {
                     throw new UncheckedIOException("cannot read the token spill file " + spillFile, e);
                 }
@@ -205,7 +189,6 @@ final class TokenStore implements AutoCloseable {
         if (spill != null) {
             try {
                 spill.close();
-                Files.deleteIfExists(spillFile);
             } catch (IOException e) {
                 // a leftover temp file is harmless; the temp folder is removed as a whole later
             }
