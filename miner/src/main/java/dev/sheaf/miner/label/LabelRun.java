@@ -151,24 +151,15 @@ public final class LabelRun {
         void submit(Listing l) {
             rethrow();
             long seq = seqs.computeIfAbsent(l.source(), k -> new AtomicLong()).getAndIncrement();
-            Thread me = Thread.currentThread();
-            Batch b = filling.get(me);
-            if (b == null) {
-                b = new Batch();
-                filling.put(me, b);
-            }
+            Batch b = filling.computeIfAbsent(Thread.currentThread(), t -> new Batch());
             if (b.add(l, seq)) {
-                filling.remove(me);
-                hand(b);
-            }
-        }
-
-        private void hand(Batch b) {
-            try {
-                queue.put(b); // put, not add: a fast single-thread producer can leave the queue full
-            } catch (InterruptedException e) {
-                Thread.currentThread().interrupt();
-                throw new IllegalStateException("interrupted while labeling", e);
+                filling.remove(Thread.currentThread());
+                try {
+                    queue.put(b); // put, not add: a fast single-thread producer can leave the queue full
+                } catch (InterruptedException e) {
+                    Thread.currentThread().interrupt();
+                    throw new IllegalStateException("interrupted while labeling", e);
+                }
             }
         }
 
@@ -198,13 +189,14 @@ public final class LabelRun {
         void drain() throws IOException {
             try {
                 for (Batch b : filling.values()) {
-                    hand(b); // the reading threads are done: their part-filled batches go as they are
+                    queue.put(b); // the reading threads are done: their part-filled batches go as they are
                 }
                 filling.clear();
                 for (int i = 0; i < workers.size(); i++) {
-                    hand(Batch.END);
+                    queue.put(Batch.END);
                 }
-            } catch (IllegalStateException e) {
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
                 throw new IOException("interrupted while stopping the labeling threads", e);
             }
             for (Thread t : workers) {

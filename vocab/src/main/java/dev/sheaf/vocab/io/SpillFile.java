@@ -67,9 +67,14 @@ public final class SpillFile implements AutoCloseable {
         return at;
     }
 
-    /** Reads exactly {@code dst.remaining()} bytes starting at {@code offset} into {@code dst}. */
-    public synchronized void read(long offset, ByteBuffer dst) throws IOException {
-        flush();
+    /**
+     * Reads exactly {@code dst.remaining()} bytes starting at {@code offset} into {@code dst}. Only the
+     * flush holds the lock: several threads picking records read the file at once.
+     */
+    public void read(long offset, ByteBuffer dst) throws IOException {
+        synchronized (this) {
+            flush();
+        }
         long pos = offset;
         while (dst.hasRemaining()) {
             int n = channel.read(dst, pos);

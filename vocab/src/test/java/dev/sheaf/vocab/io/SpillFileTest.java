@@ -96,7 +96,7 @@ class SpillFileTest {
     }
 
     @Test
-    void severalThreadsAppendWithoutLosingOrTearingARecord() throws Exception {
+    void severalThreadsAppendAndReadWithoutLosingOrTearingARecord() throws Exception {
         Map<Integer, Long> offsets = new ConcurrentHashMap<>();
         try (SpillFile f = SpillFile.create(dir.resolve("t.spill"))) {
             List<Thread> threads = new ArrayList<>();
@@ -127,6 +127,29 @@ class SpillFileTest {
                 total += 1 + i % 700;
             }
             assertEquals(total, f.size());
+            List<Thread> readers = new ArrayList<>();
+            Map<Integer, Boolean> same = new ConcurrentHashMap<>();
+            for (int t = 0; t < 4; t++) {
+                int base = t * 10_000;
+                Thread th = new Thread(() -> {
+                    for (int i = base; i < base + 2_000; i++) {
+                        ByteBuffer b = ByteBuffer.allocate(1 + i % 700);
+                        try {
+                            f.read(offsets.get(i), b);
+                        } catch (IOException e) {
+                            throw new UncheckedIOException(e);
+                        }
+                        same.put(i, java.util.Arrays.equals(record(i, 1 + i % 700), b.array()));
+                    }
+                });
+                readers.add(th);
+                th.start();
+            }
+            for (Thread th : readers) {
+                th.join();
+            }
+            assertEquals(8_000, same.size(), "every reader finished");
+            assertFalse(same.containsValue(false), "a record read by several threads at once came back torn");
         }
     }
 
